@@ -34,6 +34,8 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'server',
+          // Cheap bcrypt in tests; production uses 12.
+          env: { BCRYPT_COST: '10' },
           environment: 'node',
           include: ['tests/server/**/*.test.ts'],
           globalSetup: ['tests/support/global-db.ts'],

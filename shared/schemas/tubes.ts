@@ -31,14 +31,16 @@ const tubeFields = z.object({
   minTempC: z.number().min(200, 'At least 200 °C').max(1350, 'At most 1350 °C'),
   maxTempC: z.number().min(200, 'At least 200 °C').max(1350, 'At most 1350 °C'),
   ambients: z.array(z.enum(AMBIENTS)).min(1, 'Allow at least one ambient'),
-  notes: z.string().max(2000).default(''),
+  notes: z.string().max(2000, 'At most 2000 characters'),
 });
 
 const rangeOrdered = (v: { minTempC?: number; maxTempC?: number }) =>
   v.minTempC === undefined || v.maxTempC === undefined || v.minTempC < v.maxTempC;
 const rangeIssue = { message: 'The lowest temperature must be below the highest', path: ['maxTempC'] };
 
-export const createTubeSchema = tubeFields.refine(rangeOrdered, rangeIssue);
+export const createTubeSchema = tubeFields
+  .extend({ notes: tubeFields.shape.notes.default('') })
+  .refine(rangeOrdered, rangeIssue);
 export type CreateTubeInput = z.infer<typeof createTubeSchema>;
 
 export const patchTubeSchema = tubeFields

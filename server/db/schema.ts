@@ -1,0 +1,146 @@
+// The Drizzle schema: the one description of the database. Migrations in
+// drizzle/ are generated from it (`npm run db:generate`) and applied at start.
+import { sql } from 'drizzle-orm';
+import {
+  bigint,
+  boolean,
+  char,
+  check,
+  datetime,
+  index,
+  int,
+  json,
+  mediumtext,
+  mysqlEnum,
+  mysqlTable,
+  text,
+  uniqueIndex,
+  varchar,
+} from 'drizzle-orm/mysql-core';
+import { ROLES } from '../../shared/schemas/users';
+import { AMBIENTS, TUBE_DEDICATIONS } from '../../shared/schemas/tubes';
+
+export const VERSION_STATES = ['draft', 'in_review', 'released', 'retired'] as const;
+
+const createdAt = () => datetime('created_at', { mode: 'date', fsp: 3 }).notNull().default(sql`CURRENT_TIMESTAMP(3)`);
+const updatedAt = () =>
+  datetime('updated_at', { mode: 'date', fsp: 3 })
+    .notNull()
+    .default(sql`CURRENT_TIMESTAMP(3)`)
+    .$onUpdate(() => new Date());
+
+export const users = mysqlTable(
+  'users',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    email: varchar('email', { length: 190 }).notNull(),
+    name: varchar('name', { length: 120 }).notNull(),
+    role: mysqlEnum('role', ROLES).notNull(),
+    passwordHash: varchar('password_hash', { length: 100 }).notNull(),
+    active: boolean('active').notNull().default(true),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [uniqueIndex('users_email_uq').on(t.email)],
+);
+
+/** Owned by express-mysql-session (its default column names); created here so migrations own it. */
+export const sessions = mysqlTable(
+  'sessions',
+  {
+    sessionId: varchar('session_id', { length: 128 }).primaryKey(),
+    expires: int('expires', { unsigned: true }).notNull(),
+    data: mediumtext('data'),
+  },
+  (t) => [index('sessions_expires_idx').on(t.expires)],
+);
+
+export const tubes = mysqlTable(
+  'tubes',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    name: varchar('name', { length: 60 }).notNull(),
+    dedication: mysqlEnum('dedication', TUBE_DEDICATIONS).notNull(),
+    minTempC: int('min_temp_c').notNull(),
+    maxTempC: int('max_temp_c').notNull(),
+    ambients: json('ambients').$type<(typeof AMBIENTS)[number][]>().notNull(),
+    notes: text('notes').notNull(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    uniqueIndex('tubes_name_uq').on(t.name),
+    check('tubes_range_ck', sql`${t.minTempC} < ${t.maxTempC}`),
+  ],
+);
+
+export const recipes = mysqlTable(
+  'recipes',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    name: varchar('name', { length: 120 }).notNull(),
+    description: text('description').notNull(),
+    ownerId: int('owner_id')
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [uniqueIndex('recipes_name_uq').on(t.name)],
+);
+
+export const recipeVersions = mysqlTable(
+  'recipe_versions',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    recipeId: int('recipe_id')
+      .notNull()
+      .references(() => recipes.id),
+    versionNo: int('version_no').notNull(),
+    state: mysqlEnum('state', VERSION_STATES).notNull().default('draft'),
+    /** Optimistic concurrency: every save of a draft must name the revision it read. */
+    revision: int('revision').notNull().default(1),
+    /** The recipe document (shared/schemas/recipe.ts), with its own schemaVersion inside. */
+    document: json('document').notNull(),
+    /** The server's authoritative engine result, stored with the version. */
+    result: json('result'),
+    engineVersion: varchar('engine_version', { length: 32 }),
+    parameterSetId: varchar('parameter_set_id', { length: 64 }),
+    /** SHA-256 of the canonical document; signatures and audit rows name it. */
+    contentHash: char('content_hash', { length: 64 }).notNull(),
+    note: text('note').notNull(),
+    authorId: int('author_id')
+      .notNull()
+      .references(() => users.id),
+    basedOnVersionId: int('based_on_version_id'),
+    submittedAt: datetime('submitted_at', { mode: 'date', fsp: 3 }),
+    releasedAt: datetime('released_at', { mode: 'date', fsp: 3 }),
+    releasedById: int('released_by_id').references(() => users.id),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    uniqueIndex('recipe_versions_no_uq').on(t.recipeId, t.versionNo),
+    index('recipe_versions_state_idx').on(t.state),
+  ],
+);
+
+/** Append-only: rows are inserted in the same transaction as the change they record. */
+export const auditEvents = mysqlTable(
+  'audit_events',
+  {
+    id: bigint('id', { mode: 'number', unsigned: true }).autoincrement().primaryKey(),
+    at: datetime('at', { mode: 'date', fsp: 3 }).notNull().default(sql`CURRENT_TIMESTAMP(3)`),
+    actorId: int('actor_id').references(() => users.id),
+    actorRole: varchar('actor_role', { length: 20 }),
+    action: varchar('action', { length: 60 }).notNull(),
+    entityType: varchar('entity_type', { length: 40 }).notNull(),
+    entityId: bigint('entity_id', { mode: 'number' }),
+    fromState: varchar('from_state', { length: 20 }),
+    toState: varchar('to_state', { length: 20 }),
+    comment: text('comment'),
+    contentHash: char('content_hash', { length: 64 }),
+    details: json('details'),
+  },
+  (t) => [index('audit_events_entity_idx').on(t.entityType, t.entityId), index('audit_events_at_idx').on(t.at)],
+);
