@@ -10,16 +10,17 @@ import { resolveDatabase } from './local-database';
 
 const env = parseEnv();
 const database = await resolveDatabase(env);
-let running: Awaited<ReturnType<typeof serve>> | undefined;
+const state: { running?: Awaited<ReturnType<typeof serve>> } = {};
 onShutdown(async () => {
   console.log('\nStopping …');
-  await running?.stop();
+  await state.running?.stop();
   await database.local?.stop();
 });
 
 console.log('Building the client …');
 await build({ root: PROJECT_ROOT, logLevel: 'warn' });
-running = await serve(env, database.url, { seed: true, serveClient: true });
+const running = await serve(env, database.url, { seed: true, serveClient: true });
+state.running = running;
 
 console.log(`\nTubewright is running at ${running.url}\n`);
 console.log('Demo sign-ins (invented people of the demo pilot line):');
