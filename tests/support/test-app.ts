@@ -7,14 +7,9 @@ import { createApp, type AppConfig, type CreatedApp } from '../../server/app';
 import { connectDatabase, type Database } from '../../server/db/index';
 import { DEMO_PEOPLE, seedDemo } from '../../server/db/seed';
 import type { Role } from '../../shared/schemas/users';
+import { TEST_CONFIG } from './test-config';
 
-export const TEST_CONFIG: AppConfig = {
-  sessionSecret: 'test-secret-test-secret-test-secret-0123',
-  sessionMaxAgeHours: 1,
-  cookieSecure: false,
-  signInLimit: { max: 1000, windowMs: 60_000 },
-  exposeStack: false,
-};
+export { TEST_CONFIG };
 
 export type Agent = TestAgent;
 
