@@ -1,19 +1,6 @@
-// vitest globalSetup for browser tests: a throwaway MariaDB, the client built
-// into a temporary folder, and the real server (demo data seeded) on a free port.
-import { mkdtempSync, rmSync } from 'node:fs';
-import type { Server } from 'node:http';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { build } from 'vite';
+// vitest globalSetup for browser tests: one running stack for the e2e project.
 import type { TestProject } from 'vitest/node';
-import { createApp } from '../../server/app';
-import { PROJECT_ROOT } from '../../server/config';
-import { connectDatabase } from '../../server/db/index';
-import { startLocalMariaDb } from '../../server/db/local-mariadb';
-import { runMigrations } from '../../server/db/migrate';
-import { seedDemo } from '../../server/db/seed';
-import { freePort } from './free-port';
-import { TEST_CONFIG } from './test-config';
+import { startAppStack } from './app-stack';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -23,28 +10,8 @@ declare module 'vitest' {
 }
 
 export default async function setup(project: TestProject) {
-  const dir = mkdtempSync(join(tmpdir(), 'tw-e2e-'));
-  const clientDir = join(dir, 'client');
-  const [dbPort, appPort] = [await freePort(), await freePort()];
-  const [mariadb] = await Promise.all([
-    startLocalMariaDb({ dataDir: join(dir, 'db'), port: dbPort, installIfMissing: true, log: () => undefined }),
-    build({ root: PROJECT_ROOT, logLevel: 'error', build: { outDir: clientDir, emptyOutDir: true } }),
-  ]);
-  const database = connectDatabase(mariadb.url, 5);
-  await runMigrations(database.db);
-  await seedDemo(database.db);
-  const created = createApp(database, { ...TEST_CONFIG, clientDir });
-  const server: Server = await new Promise((ok) => {
-    const s = created.app.listen(appPort, '127.0.0.1', () => ok(s));
-  });
-  project.provide('baseUrl', `http://127.0.0.1:${appPort}`);
-  project.provide('appDatabaseUrl', mariadb.url);
-  return async () => {
-    server.closeAllConnections();
-    await new Promise<void>((ok) => server.close(() => ok()));
-    await created.close();
-    await database.close();
-    await mariadb.stop();
-    rmSync(dir, { recursive: true, force: true });
-  };
+  const stack = await startAppStack();
+  project.provide('baseUrl', stack.baseUrl);
+  project.provide('appDatabaseUrl', stack.databaseUrl);
+  return () => stack.stop();
 }
