@@ -50,6 +50,7 @@ export default defineConfig({
         test: {
           name: 'e2e',
           environment: 'node',
+          env: { BCRYPT_COST: '10' },
           include: ['tests/e2e/**/*.test.ts'],
           globalSetup: ['tests/support/global-app.ts'],
           hookTimeout: 120_000,
