@@ -15,6 +15,14 @@ import type { RouteEntry, RouteModule } from './routes/define-routes';
 import { healthRoutes } from './routes/health.routes';
 import { tubesRoutes } from './routes/tubes.routes';
 import { usersRoutes } from './routes/users.routes';
+import { computeRoutes } from './routes/compute.routes';
+import { recipesRoutes } from './routes/recipes.routes';
+import { versionsRoutes } from './routes/versions.routes';
+import { auditRoutes } from './routes/audit.routes';
+import { outboxRoutes } from './routes/outbox.routes';
+import { signoffRoutes } from './routes/signoff.routes';
+import { lotsRoutes } from './routes/lots.routes';
+import { deliverOutbox, type Mailer } from './services/mail/outbox.service';
 
 export interface AppConfig {
   sessionSecret: string;
@@ -28,16 +36,25 @@ export interface AppConfig {
   clientDir?: string;
 }
 
+export interface AppDeps {
+  /** Where e-mail goes; without one, messages stay queued in the outbox. */
+  mailer?: Mailer;
+  log?: (err: unknown) => void;
+}
+
 export interface CreatedApp {
   app: express.Express;
   routes: RouteEntry[];
+  /** Delivers queued e-mail now (tests await it; the server also runs it after each transition). */
+  flushMail(): Promise<void>;
   close(): Promise<void>;
 }
 
 export const SESSION_COOKIE = 'tw.sid';
 
-export function createApp(database: Database, config: AppConfig): CreatedApp {
+export function createApp(database: Database, config: AppConfig, deps: AppDeps = {}): CreatedApp {
   const { db, pool } = database;
+  const log = deps.log ?? ((e: unknown) => console.error(e));
   const app = express();
   app.disable('x-powered-by');
   if (config.trustProxy) app.set('trust proxy', /^\d+$/.test(config.trustProxy) ? Number(config.trustProxy) : config.trustProxy);
@@ -79,7 +96,19 @@ export function createApp(database: Database, config: AppConfig): CreatedApp {
     },
   });
 
-  const modules: RouteModule[] = [authRoutes(db, signInLimiter), healthRoutes(db), usersRoutes(db), tubesRoutes(db)];
+  const modules: RouteModule[] = [
+    authRoutes(db, signInLimiter),
+    healthRoutes(db),
+    usersRoutes(db),
+    tubesRoutes(db),
+    computeRoutes(),
+    recipesRoutes(db),
+    versionsRoutes(db),
+    signoffRoutes(db, deps.mailer, log),
+    auditRoutes(db),
+    outboxRoutes(db, deps.mailer),
+    lotsRoutes(db),
+  ];
   for (const m of modules) app.use(m.base, m.router);
   app.use('/api', apiNotFound);
 
@@ -88,11 +117,12 @@ export function createApp(database: Database, config: AppConfig): CreatedApp {
     app.get('/{*splat}', (_req, res) => res.sendFile(join(config.clientDir!, 'index.html')));
   }
 
-  app.use(errorHandler({ exposeStack: config.exposeStack }));
+  app.use(errorHandler({ exposeStack: config.exposeStack, log }));
 
   return {
     app,
     routes: modules.flatMap((m) => m.entries),
+    flushMail: () => deliverOutbox(db, deps.mailer),
     close: () => store.close(),
   };
 }

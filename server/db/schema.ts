@@ -83,10 +83,18 @@ export const recipes = mysqlTable(
     ownerId: int('owner_id')
       .notNull()
       .references(() => users.id),
+    /** Denormalised from the newest version so the list pages, sorts and filters in SQL. */
+    latestVersionNo: int('latest_version_no').notNull().default(1),
+    latestState: mysqlEnum('latest_state', VERSION_STATES).notNull().default('draft'),
+    releasedVersionNo: int('released_version_no'),
+    /** Dopants of the newest version, e.g. ",B,P," (commas around each for LIKE filters). */
+    dopants: varchar('dopants', { length: 40 }).notNull().default(''),
+    /** Tube ids of the newest version, e.g. ",3,4,". */
+    tubeIds: varchar('tube_ids', { length: 255 }).notNull().default(''),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [uniqueIndex('recipes_name_uq').on(t.name)],
+  (t) => [uniqueIndex('recipes_name_uq').on(t.name), index('recipes_updated_idx').on(t.updatedAt)],
 );
 
 export const recipeVersions = mysqlTable(
@@ -104,6 +112,8 @@ export const recipeVersions = mysqlTable(
     document: json('document').notNull(),
     /** The server's authoritative engine result, stored with the version. */
     result: json('result'),
+    /** Headline numbers of `result` for lists and compare (junctions, Rs, surface). */
+    summary: json('summary'),
     engineVersion: varchar('engine_version', { length: 32 }),
     parameterSetId: varchar('parameter_set_id', { length: 64 }),
     /** SHA-256 of the canonical document; signatures and audit rows name it. */
@@ -116,6 +126,11 @@ export const recipeVersions = mysqlTable(
     submittedAt: datetime('submitted_at', { mode: 'date', fsp: 3 }),
     releasedAt: datetime('released_at', { mode: 'date', fsp: 3 }),
     releasedById: int('released_by_id').references(() => users.id),
+    /** The stated meaning of the release signature (see shared/schemas/signoff.ts). */
+    releaseMeaning: varchar('release_meaning', { length: 60 }),
+    /** The lead's comment when the version was last returned to Draft. */
+    reviewComment: text('review_comment'),
+    retiredAt: datetime('retired_at', { mode: 'date', fsp: 3 }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
@@ -143,4 +158,57 @@ export const auditEvents = mysqlTable(
     details: json('details'),
   },
   (t) => [index('audit_events_entity_idx').on(t.entityType, t.entityId), index('audit_events_at_idx').on(t.at)],
+);
+
+export const OUTBOX_STATUSES = ['pending', 'sent', 'failed'] as const;
+
+/** Every e-mail the app sends, queued in the transaction of what caused it. */
+export const outboxMessages = mysqlTable(
+  'outbox_messages',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    toAddresses: text('to_addresses').notNull(),
+    subject: varchar('subject', { length: 200 }).notNull(),
+    bodyText: text('body_text').notNull(),
+    status: mysqlEnum('status', OUTBOX_STATUSES).notNull().default('pending'),
+    attempts: int('attempts').notNull().default(0),
+    lastError: text('last_error'),
+    relatedType: varchar('related_type', { length: 40 }),
+    relatedId: int('related_id'),
+    messageId: varchar('message_id', { length: 200 }),
+    /** A failed message waits until then before the next automatic attempt. */
+    nextAttemptAt: datetime('next_attempt_at', { mode: 'date', fsp: 3 }),
+    createdAt: createdAt(),
+    sentAt: datetime('sent_at', { mode: 'date', fsp: 3 }),
+  },
+  (t) => [index('outbox_status_idx').on(t.status)],
+);
+
+export const LOT_STATUSES = ['open', 'in_progress', 'complete', 'scrapped'] as const;
+
+export const lots = mysqlTable(
+  'lots',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    lotCode: varchar('lot_code', { length: 40 }).notNull(),
+    wafers: int('wafers').notNull(),
+    tubeId: int('tube_id')
+      .notNull()
+      .references(() => tubes.id),
+    versionId: int('version_id')
+      .notNull()
+      .references(() => recipeVersions.id),
+    status: mysqlEnum('status', LOT_STATUSES).notNull().default('open'),
+    notes: text('notes').notNull(),
+    openedById: int('opened_by_id')
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    uniqueIndex('lots_code_uq').on(t.lotCode),
+    index('lots_version_idx').on(t.versionId),
+    check('lots_wafers_ck', sql`${t.wafers} BETWEEN 1 AND 200`),
+  ],
 );

@@ -12,6 +12,7 @@ import { connectDatabase } from '../../server/db/index';
 import { startLocalMariaDb } from '../../server/db/local-mariadb';
 import { runMigrations } from '../../server/db/migrate';
 import { seedDemo } from '../../server/db/seed';
+import { seedScenario } from '../../server/db/seed-scenario';
 import { freePort } from './free-port';
 import { TEST_CONFIG } from './test-config';
 
@@ -33,6 +34,7 @@ export async function startAppStack(): Promise<AppStack> {
   const database = connectDatabase(mariadb.url, 5);
   await runMigrations(database.db);
   await seedDemo(database.db);
+  await seedScenario(database.db);
   const created = createApp(database, { ...TEST_CONFIG, clientDir });
   const server: Server = await new Promise((ok) => {
     const s = created.app.listen(appPort, '127.0.0.1', () => ok(s));

@@ -8,6 +8,8 @@ import { connectDatabase, type Database } from '../../server/db/index';
 import { DEMO_PEOPLE, seedDemo } from '../../server/db/seed';
 import type { Role } from '../../shared/schemas/users';
 import { TEST_CONFIG } from './test-config';
+import { createMailer } from '../../server/services/mail/outbox.service';
+import { startSmtpFake, type SmtpFake } from '../../server/services/mail/smtp-fake';
 
 export { TEST_CONFIG };
 
@@ -42,7 +44,11 @@ export interface TestContext {
   anonymous(): Agent;
   /** Another app instance over the same database (a second server process). */
   newInstance(config?: Partial<AppConfig>): CreatedApp;
+  /** The in-process SMTP fake every instance mails to. */
+  smtp: SmtpFake;
 }
+
+export const TEST_APP_URL = 'http://tubewright.test';
 
 export function useTestApp(config: Partial<AppConfig> = {}): TestContext {
   const instances: CreatedApp[] = [];
@@ -51,8 +57,10 @@ export function useTestApp(config: Partial<AppConfig> = {}): TestContext {
     ctx.database = connectDatabase(inject('databaseUrl'), 4);
     await resetDatabase(ctx.database);
     await seedDemo(ctx.database.db);
+    ctx.smtp = await startSmtpFake();
+    const mailer = createMailer(ctx.smtp.url, 'Tubewright <tubewright@pilotline.example>', TEST_APP_URL);
     ctx.newInstance = (more = {}) => {
-      const c = createApp(ctx.database, { ...TEST_CONFIG, ...config, ...more });
+      const c = createApp(ctx.database, { ...TEST_CONFIG, ...config, ...more }, { mailer });
       instances.push(c);
       return c;
     };
@@ -71,6 +79,7 @@ export function useTestApp(config: Partial<AppConfig> = {}): TestContext {
   afterAll(async () => {
     for (const c of instances) await c.close();
     await ctx.database?.close();
+    await ctx.smtp?.stop();
   });
   return ctx;
 }

@@ -19,6 +19,30 @@ const MATRIX: Record<string, Access> = {
   'GET /api/tubes/:id': ALL,
   'POST /api/tubes': ['admin'],
   'PATCH /api/tubes/:id': ['admin'],
+  'POST /api/compute': ['engineer', 'lead', 'admin'],
+  'GET /api/recipes': ALL,
+  'POST /api/recipes': ['engineer', 'lead'],
+  'GET /api/recipes/:id': ALL,
+  'PATCH /api/recipes/:id': ['engineer', 'lead'],
+  'GET /api/versions/:id': ALL,
+  'PUT /api/versions/:id': ['engineer', 'lead'],
+  'POST /api/versions/:id/copy': ['engineer', 'lead'],
+  'GET /api/sign-off/queue': ['lead', 'admin'],
+  'POST /api/versions/:id/submit': ['engineer', 'lead'],
+  'POST /api/versions/:id/sign-off': ['lead'],
+  'POST /api/versions/:id/return': ['lead'],
+  'POST /api/versions/:id/retire': ['lead'],
+  'GET /api/audit': ['admin', 'lead'],
+  'GET /api/audit/export.csv': ['admin', 'lead'],
+  'GET /api/outbox': ['admin'],
+  'POST /api/outbox/:id/retry': ['admin'],
+  'GET /api/versions/:id/traveller.pdf': ALL,
+  'GET /api/lots': ALL,
+  'POST /api/lots': ['operator', 'engineer'],
+  'POST /api/lots/travellers': ALL,
+  'GET /api/lots/:id': ALL,
+  'PATCH /api/lots/:id': ['operator', 'engineer'],
+  'GET /api/lots/:id/traveller.pdf': ALL,
 };
 
 const ctx = useTestApp();
@@ -48,7 +72,7 @@ describe('role matrix', () => {
     if (path === '/api/auth/sign-out') return; // would end the shared agent's session; covered in auth tests
     const agent: Agent = who === 'anonymous' ? request.agent(ctx.created.app) : await agentFor(who);
     const url = path.replace(':id', '1');
-    const res = await agent[method.toLowerCase() as 'get' | 'post' | 'patch'](url).send({});
+    const res = await agent[method.toLowerCase() as 'get' | 'post' | 'patch' | 'put'](url).send({});
     const allowed = access === 'public' || (who !== 'anonymous' && (access === 'signed-in' || access.includes(who)));
     if (allowed) {
       expect([401, 403]).not.toContain(res.status);

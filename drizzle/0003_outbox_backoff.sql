@@ -1,0 +1,1 @@
+ALTER TABLE `outbox_messages` ADD `next_attempt_at` datetime(3);
