@@ -39,7 +39,7 @@ import { TWO_STEP_MIN_RATIO } from './profiles-analytic';
 import { dopingFromResistivity, resistivityFromDoping } from './resistivity';
 import { assertFiniteResult } from './result-guard';
 import { DEFAULT_GRID_NODES, DEFAULT_TIME_STEPS, type TemperatureSegment } from './solver-fd';
-import { planSteps, recipeDopants, type StepPlan } from './step-plan';
+import { calibrationFactor, planSteps, recipeDopants, type StepPlan, type TubeFactors } from './step-plan';
 import {
   ENGINE_VERSION,
   type DopantStepBudget,
@@ -61,6 +61,22 @@ const MAX_REACH_ENHANCEMENT = 4;
 export interface SolverTuning {
   gridNodes?: number;
   timeSteps?: number;
+  /** Fitted diffusivity factor per tube id; applied only when the recipe opts in. */
+  tubeFactors?: TubeFactors;
+}
+
+/** The factors that actually multiplied D: one per tube that has a furnace step and a factor. */
+function appliedCalibration(doc: RecipeDocument, tubeFactors: TubeFactors): RecipeResult['calibration'] {
+  const factors = new Map<number, number>();
+  for (const s of doc.steps) {
+    if (s.kind === 'implant' || s.tubeId === null) continue;
+    const f = calibrationFactor(doc, s.tubeId, tubeFactors);
+    if (f !== 1 || tubeFactors[s.tubeId] !== undefined) factors.set(s.tubeId, f);
+  }
+  return {
+    optedIn: doc.options.useTubeCalibration,
+    factors: doc.options.useTubeCalibration ? [...factors].map(([tubeId, factor]) => ({ tubeId, factor })) : [],
+  };
 }
 
 const sci = (x: number) => x.toExponential(2).replace('e+', 'e');
@@ -204,7 +220,7 @@ function segmentsOf(plan: StepPlan, timeSteps: number): TemperatureSegment[] {
  * Computes a recipe: thermal budget per step and dopant, profiles, junctions, sheet
  * resistance after every step and the final profile. Pure and deterministic.
  * @param doc a document parsed by parseRecipeDocument (numbers in canonical units)
- * @param tuning solver resolution (tests and benchmarks only)
+ * @param tuning solver resolution (tests and benchmarks) and the tubes' calibration factors
  * @throws EngineInputError naming the field when an input cannot be computed with
  */
 export function computeRecipe(doc: RecipeDocument, tuning: SolverTuning = {}): RecipeResult {
@@ -213,7 +229,7 @@ export function computeRecipe(doc: RecipeDocument, tuning: SolverTuning = {}): R
   const { backgroundCm3, resistivityOhmCm } = resolveSubstrate(doc);
   const bgSigned = doc.substrate.type === 'n' ? backgroundCm3 : -backgroundCm3;
   const dopants = recipeDopants(doc);
-  const plans = planSteps(doc, warnings);
+  const plans = planSteps(doc, warnings, tuning.tubeFactors);
   const surfaceMode = doc.options.implantSurface;
   const nodes = tuning.gridNodes ?? DEFAULT_GRID_NODES;
   const timeSteps = tuning.timeSteps ?? DEFAULT_TIME_STEPS;
@@ -266,7 +282,7 @@ export function computeRecipe(doc: RecipeDocument, tuning: SolverTuning = {}): R
               segments: segmentsOf(plan, timeSteps),
               backgroundNetCm3: bgSigned,
               sign: signOf,
-              diffusivity: (d: Dopant, t: number, n: number) => fermiDiffusivity(d, t, n, doc.parameterSet) * plan.dt[d].oedFactor,
+              diffusivity: (d: Dopant, t: number, n: number) => fermiDiffusivity(d, t, n, doc.parameterSet) * plan.dt[d].oedFactor * plan.dt[d].calibrationFactor,
               intrinsicCarriers: intrinsicCarrierConcentration,
             }
           : null;
@@ -318,6 +334,7 @@ export function computeRecipe(doc: RecipeDocument, tuning: SolverTuning = {}): R
         present: isPresent,
         diffusivityCm2s: b.setpointCm2s,
         oedFactor: b.oedFactor,
+        calibrationFactor: b.calibrationFactor,
         dtCm2: b.totalCm2,
         sqrtDtUm: Math.sqrt(b.totalCm2) / UM,
         diffusionLengthUm: (2 * Math.sqrt(b.totalCm2)) / UM,
@@ -371,6 +388,7 @@ export function computeRecipe(doc: RecipeDocument, tuning: SolverTuning = {}): R
     method: numericalFrom < 0 ? 'analytic' : usedAnalytic ? 'mixed' : 'numerical',
     implantSurface: surfaceMode,
     concentrationDependent: doc.options.concentrationDependent,
+    calibration: appliedCalibration(doc, tuning.tubeFactors ?? {}),
     steps: rows,
     final: {
       junctions: layer.junctionsCm.map((x, i) => {

@@ -24,5 +24,5 @@ export * from './junctions';
 export * from './layer';
 export * from './oxidation-effect';
 export * from './result-guard';
-export { planSteps, recipeDopants, type StepPlan, type DopantDt, type OxideGrowth } from './step-plan';
+export { planSteps, recipeDopants, calibrationFactor, type StepPlan, type DopantDt, type OxideGrowth, type TubeFactors } from './step-plan';
 export { computeRecipe, type SolverTuning } from './compute-recipe';

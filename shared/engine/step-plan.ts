@@ -6,6 +6,7 @@ import { DOPANTS, DOPANT_INFO, type Dopant } from './dopants';
 import { diffusivity } from './diffusivity';
 import { getParameterSet } from './parameter-sets';
 import { solidSolubility, solidSolubilityRangeC } from './solid-solubility';
+import { EngineInputError } from './errors';
 import { oedFactor, oxideThickness } from './oxidation';
 import { rampDurationsMin, stepDt, type StepDt, type TemperatureProgram } from './thermal-budget';
 import type { EngineWarning } from './types';
@@ -14,6 +15,8 @@ export type Ambient = 'inert' | 'dry-o2' | 'wet-o2';
 
 export interface DopantDt extends StepDt {
   oedFactor: number;
+  /** The tube's fitted diffusivity factor applied in this step (1 when none). */
+  calibrationFactor: number;
 }
 
 export interface OxideGrowth {
@@ -38,8 +41,20 @@ export interface StepPlan {
 }
 
 const ZERO_DT: DopantDt = {
-  holdCm2: 0, rampUpCm2: 0, rampDownCm2: 0, totalCm2: 0, setpointCm2s: 0, equivalentTimeMin: 0, oedFactor: 1,
+  holdCm2: 0, rampUpCm2: 0, rampDownCm2: 0, totalCm2: 0, setpointCm2s: 0, equivalentTimeMin: 0, oedFactor: 1, calibrationFactor: 1,
 };
+
+/** Fitted diffusivity factor per tube id (calibration from measured lots). */
+export type TubeFactors = Record<number, number>;
+
+/** The factor for a step's tube, when the recipe opts into tube calibration. */
+export function calibrationFactor(doc: RecipeDocument, tubeId: number | null, tubeFactors: TubeFactors): number {
+  if (!doc.options.useTubeCalibration || tubeId === null) return 1;
+  const f = tubeFactors[tubeId];
+  if (f === undefined) return 1;
+  if (!(f > 0) || !Number.isFinite(f)) throw new EngineInputError(`Calibration factor of tube ${tubeId} must be a positive number`, 'options.useTubeCalibration');
+  return f;
+}
 
 /** The dopants a recipe uses, in DOPANTS order. */
 export function recipeDopants(doc: RecipeDocument): Dopant[] {
@@ -63,7 +78,7 @@ function fmt(x: number): string {
 }
 
 /** Plans every step; pushes parameter-range warnings into `warnings`. */
-export function planSteps(doc: RecipeDocument, warnings: EngineWarning[]): StepPlan[] {
+export function planSteps(doc: RecipeDocument, warnings: EngineWarning[], tubeFactors: TubeFactors = {}): StepPlan[] {
   const setId = doc.parameterSet;
   const set = getParameterSet(setId);
   const dopants = recipeDopants(doc);
@@ -88,14 +103,17 @@ export function planSteps(doc: RecipeDocument, warnings: EngineWarning[]): StepP
     }
     for (const d of dopants) {
       const oed = ambient === 'inert' ? 1 : oedFactor(ambient, d, step.tempC);
+      const cal = calibrationFactor(doc, step.tubeId, tubeFactors);
+      const k = oed * cal;
       const budget = stepDt((t) => diffusivity(d, t, setId), program);
       dt[d] = {
         oedFactor: oed,
-        holdCm2: budget.holdCm2 * oed,
-        rampUpCm2: budget.rampUpCm2 * oed,
-        rampDownCm2: budget.rampDownCm2 * oed,
-        totalCm2: budget.totalCm2 * oed,
-        setpointCm2s: budget.setpointCm2s * oed,
+        calibrationFactor: cal,
+        holdCm2: budget.holdCm2 * k,
+        rampUpCm2: budget.rampUpCm2 * k,
+        rampDownCm2: budget.rampDownCm2 * k,
+        totalCm2: budget.totalCm2 * k,
+        setpointCm2s: budget.setpointCm2s * k,
         equivalentTimeMin: budget.equivalentTimeMin,
       };
     }

@@ -33,10 +33,12 @@ export interface DopantStepBudget {
   dopant: Dopant;
   /** True once the dopant is in the wafer (introduced by this or an earlier step). */
   present: boolean;
-  /** Intrinsic D at the setpoint × the oxidation-enhancement factor, cm²/s. */
+  /** Intrinsic D at the setpoint × the oxidation-enhancement and calibration factors, cm²/s. */
   diffusivityCm2s: number;
   /** Oxidation-enhanced diffusion factor applied in this step (1 in inert ambient). */
   oedFactor: number;
+  /** The step's tube calibration factor applied to D (1 when none applies). */
+  calibrationFactor: number;
   /** ∫D(T(t))dt over the step, ramps included, cm². */
   dtCm2: number;
   /** √(Dt), µm. */
@@ -154,6 +156,8 @@ export interface RecipeResult {
   /** Implant surface treatment used (see recipe options). */
   implantSurface: 'reflect' | 'lose';
   concentrationDependent: boolean;
+  /** Tube calibration: whether the recipe opted in, and the factors applied to its steps' tubes. */
+  calibration: { optedIn: boolean; factors: { tubeId: number; factor: number }[] };
   steps: StepResult[];
   final: LayerResult & { oxideThicknessUm: number; siliconConsumedUm: number };
   profile: ProfileResult;

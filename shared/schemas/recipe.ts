@@ -179,6 +179,8 @@ const optionsSchema = z
      */
     implantSurface: z.enum(IMPLANT_SURFACE_TREATMENTS, { error: 'Implant surface must be reflect or lose' }).default('reflect'),
     concentrationDependent: z.boolean({ error: 'Concentration-dependent diffusion must be true or false' }).default(false),
+    /** Apply each tube's fitted diffusivity factor (calibration from measured lots) to the steps run in it. */
+    useTubeCalibration: z.boolean({ error: 'Use of tube calibration must be true or false' }).default(false),
     points: z
       .number({ error: 'Profile points must be a whole number' })
       .int('Profile points must be a whole number')
@@ -190,7 +192,7 @@ const optionsSchema = z
       .nullable()
       .default(null),
   })
-  .default({ method: 'auto', implantSurface: 'reflect', concentrationDependent: false, points: 400, depthUm: null });
+  .default({ method: 'auto', implantSurface: 'reflect', concentrationDependent: false, useTubeCalibration: false, points: 400, depthUm: null });
 
 const parameterSetIds = () => PARAMETER_SETS.map((p) => p.id);
 
@@ -293,7 +295,7 @@ export function newRecipeDocument(): RecipeDocument {
     schemaVersion: RECIPE_SCHEMA_VERSION,
     substrate: { type: 'p', background: { concentration: 1e15 }, orientation: '100' },
     parameterSet: DEFAULT_PARAMETER_SET,
-    options: { method: 'auto', implantSurface: 'reflect', concentrationDependent: false, points: 400, depthUm: null },
+    options: { method: 'auto', implantSurface: 'reflect', concentrationDependent: false, useTubeCalibration: false, points: 400, depthUm: null },
     steps: [],
   };
 }

@@ -55,7 +55,7 @@ describe('parseRecipeDocument', () => {
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.doc.steps[0]).toMatchObject({ tempC: 1100, timeMin: 60, loadTempC: 800, rampUpCPerMin: 10, rampDownCPerMin: 5, ambient: 'inert', tubeId: null });
-    expect(r.doc.options).toEqual({ method: 'auto', implantSurface: 'reflect', concentrationDependent: false, points: 400, depthUm: null });
+    expect(r.doc.options).toEqual({ method: 'auto', implantSurface: 'reflect', concentrationDependent: false, useTubeCalibration: false, points: 400, depthUm: null });
     expect(r.doc.parameterSet).toBe('fair-1981');
     expect(r.doc.substrate.orientation).toBe('100');
   });
