@@ -22,6 +22,7 @@ import { auditRoutes } from './routes/audit.routes';
 import { outboxRoutes } from './routes/outbox.routes';
 import { signoffRoutes } from './routes/signoff.routes';
 import { lotsRoutes } from './routes/lots.routes';
+import { measurementsRoutes } from './routes/measurements.routes';
 import { deliverOutbox, type Mailer } from './services/mail/outbox.service';
 
 export interface AppConfig {
@@ -101,13 +102,14 @@ export function createApp(database: Database, config: AppConfig, deps: AppDeps =
     healthRoutes(db),
     usersRoutes(db),
     tubesRoutes(db),
-    computeRoutes(),
+    computeRoutes(db),
     recipesRoutes(db),
     versionsRoutes(db),
     signoffRoutes(db, deps.mailer, log),
     auditRoutes(db),
     outboxRoutes(db, deps.mailer),
     lotsRoutes(db),
+    measurementsRoutes(db),
   ];
   for (const m of modules) app.use(m.base, m.router);
   app.use('/api', apiNotFound);
@@ -123,6 +125,10 @@ export function createApp(database: Database, config: AppConfig, deps: AppDeps =
     app,
     routes: modules.flatMap((m) => m.entries),
     flushMail: () => deliverOutbox(db, deps.mailer),
-    close: () => store.close(),
+    async close() {
+      // Let a delivery under way finish its writes before the pool goes.
+      await deliverOutbox(db, deps.mailer).catch(log);
+      await store.close();
+    },
   };
 }

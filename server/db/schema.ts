@@ -3,6 +3,7 @@
 import { sql } from 'drizzle-orm';
 import {
   bigint,
+  double,
   boolean,
   char,
   check,
@@ -211,4 +212,57 @@ export const lots = mysqlTable(
     index('lots_version_idx').on(t.versionId),
     check('lots_wafers_ck', sql`${t.wafers} BETWEEN 1 AND 200`),
   ],
+);
+
+export const MEASUREMENT_KINDS = ['profile', 'sheet_resistance'] as const;
+
+/** One uploaded file of measured values against a lot; the points stay as parsed. */
+export const measurements = mysqlTable(
+  'measurements',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    lotId: int('lot_id')
+      .notNull()
+      .references(() => lots.id),
+    kind: mysqlEnum('kind', MEASUREMENT_KINDS).notNull(),
+    /** e.g. 'SIMS', 'spreading resistance', 'four-point probe'. */
+    method: varchar('method', { length: 40 }).notNull(),
+    fileName: varchar('file_name', { length: 200 }).notNull(),
+    /** Profile: { depthUm[], concentrationCm3[] }; sheet resistance: { sites[], ohmSq[] }. */
+    points: json('points').notNull(),
+    /** Measured junction depth or Rs statistics (see shared/schemas/measurements.ts). */
+    summary: json('summary').notNull(),
+    notes: text('notes').notNull(),
+    uploadedById: int('uploaded_by_id')
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+  },
+  (t) => [index('measurements_lot_idx').on(t.lotId)],
+);
+
+/** A fitted per-tube diffusivity factor; the newest row of a tube is in force. */
+export const calibrations = mysqlTable(
+  'calibrations',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    tubeId: int('tube_id')
+      .notNull()
+      .references(() => tubes.id),
+    factor: double('factor').notNull(),
+    /** Standard error of ln(factor) from the fit's residuals. */
+    lnFactorStdErr: double('ln_factor_std_err').notNull(),
+    /** RMS of ln(measured/predicted) junction depth, before and after the correction. */
+    rmsLogErrorBefore: double('rms_log_error_before').notNull(),
+    rmsLogErrorAfter: double('rms_log_error_after').notNull(),
+    points: int('points').notNull(),
+    /** Per lot: measured and predicted junction depths used by the fit. */
+    data: json('data').notNull(),
+    note: text('note').notNull(),
+    fittedById: int('fitted_by_id')
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+  },
+  (t) => [index('calibrations_tube_idx').on(t.tubeId)],
 );

@@ -11,6 +11,9 @@ import { DEMO_PEOPLE } from './seed';
 import { createLot, patchLot } from '../services/lots.service';
 import { copyVersion, createRecipe, getRecipe, getVersion, saveDraft } from '../services/recipes.service';
 import { returnVersion, signOffVersion, submitVersion } from '../services/signoff.service';
+import { storeUpload } from '../services/measurements.service';
+import { fitCalibration } from '../services/calibrations.service';
+import { syntheticProfileCsv, syntheticSheetCsv } from './demo-measurements';
 
 type Actor = { id: number; role: Role };
 type Step = RecipeDocumentInput['steps'][number];
@@ -44,7 +47,7 @@ function scenario(t: Tubes) {
         { document: boron(60), then: 'release' as const },
         { document: boron(75), then: 'draft' as const, note: 'Deeper junction for the 2027 mask set' },
       ],
-      lots: [{ lotCode: 'HPL-26-0412', wafers: 25, tube: 'anneal' as const, status: 'in_progress' as const }],
+      lots: [{ lotCode: 'HPL-26-0412', wafers: 25, tube: 'anneal' as const, status: 'in_progress' as const, measured: true }],
     },
     {
       name: 'Emitter · POCl3 phosphorus',
@@ -54,7 +57,7 @@ function scenario(t: Tubes) {
         { document: phos(20), then: 'release' as const },
         { document: phos(25), then: 'review' as const, note: 'Lower emitter sheet resistance' },
       ],
-      lots: [{ lotCode: 'HPL-26-0415', wafers: 12, tube: 'phos' as const, status: 'open' as const }],
+      lots: [{ lotCode: 'HPL-26-0415', wafers: 12, tube: 'phos' as const, status: 'open' as const, measured: false }],
     },
     {
       name: 'Source/drain · arsenic implant and anneal',
@@ -85,7 +88,10 @@ function scenario(t: Tubes) {
           then: 'release' as const,
         },
       ],
-      lots: [{ lotCode: 'HPL-26-0398', wafers: 25, tube: 'anneal' as const, status: 'complete' as const }],
+      lots: [
+        { lotCode: 'HPL-26-0398', wafers: 25, tube: 'anneal' as const, status: 'complete' as const, measured: true },
+        { lotCode: 'HPL-26-0401', wafers: 24, tube: 'anneal' as const, status: 'complete' as const, measured: true },
+      ],
     },
     {
       name: 'Field oxide · wet 1000 °C',
@@ -155,8 +161,26 @@ export async function seedScenario(db: Db): Promise<{ created: number }> {
       if (!released) break;
       const made = await createLot(db, operator, { lotCode: lot.lotCode, wafers: lot.wafers, tubeId: t[lot.tube]!, versionId: released.id, notes: 'Demo lot (invented).' });
       if (lot.status !== 'open') await patchLot(db, operator, made.id, { status: lot.status });
+      if (lot.measured) await attachInventedMeasurements(db, operator, made.id, released.id, t[lot.tube]!);
     }
     created++;
   }
+  if (created > 0) await fitCalibration(db, leadActor, t.anneal!, 'First fit from the demo lots (invented data).').catch(() => undefined);
   return { created };
+}
+
+/**
+ * The demo's anneal tube runs a little hot: its invented measured files are
+ * made with D × 1.18 and ±4 % noise, so its calibration has something to find.
+ */
+const DEMO_TUBE_FACTOR = 1.18;
+
+async function attachInventedMeasurements(db: Db, operator: Actor, lotId: number, versionId: number, tubeId: number): Promise<void> {
+  const version = await getVersion(db, operator, versionId);
+  const options = { factor: DEMO_TUBE_FACTOR, tubeId, noisePct: 4, seed: lotId * 7 };
+  const profile = syntheticProfileCsv(version.document, options);
+  const sheet = syntheticSheetCsv(version.document, options);
+  const notes = 'INVENTED DEMO DATA generated from the model with noise; not a measurement.';
+  await storeUpload(db, operator, lotId, { kind: 'profile', method: 'SIMS', notes }, { originalname: `demo-sims-lot${lotId}.csv`, buffer: Buffer.from(profile) });
+  await storeUpload(db, operator, lotId, { kind: 'sheet_resistance', notes }, { originalname: `demo-4pp-lot${lotId}.csv`, buffer: Buffer.from(sheet) });
 }

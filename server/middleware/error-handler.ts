@@ -19,9 +19,13 @@ function fromDatabase(err: unknown): HttpError | undefined {
   }
 }
 
-/** Body-parser errors carry `type` and `status`. */
+/** Body-parser errors carry `type` and `status`; multer's carry `code`. */
 function fromBodyParser(err: unknown): HttpError | undefined {
-  const e = err as { type?: string; status?: number };
+  const e = err as { type?: string; status?: number; name?: string; code?: string; field?: string };
+  if (e?.name === 'MulterError') {
+    if (e.code === 'LIMIT_FILE_SIZE') return new HttpError(413, 'too_large', 'The file is too large', [{ path: 'file', message: 'The file is larger than 2 MB' }]);
+    return new HttpError(400, 'invalid_upload', 'Send one CSV file in the field "file"', [{ path: e.field ?? 'file', message: 'Send one CSV file in the field "file"' }]);
+  }
   if (e?.type === 'entity.parse.failed') return new HttpError(400, 'malformed_json', 'The request body is not valid JSON');
   if (e?.type === 'entity.too.large') return new HttpError(413, 'too_large', 'The request body is too large');
   if (e?.status && e.status >= 400 && e.status < 500) return new HttpError(e.status, 'bad_request', 'The request is not valid');

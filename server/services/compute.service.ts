@@ -3,13 +3,15 @@
 import { computeRecipe } from '../../shared/engine/index';
 import { EngineInputError } from '../../shared/engine/errors';
 import type { RecipeResult } from '../../shared/engine/types';
+import type { TubeFactors } from '../../shared/engine/step-plan';
 import type { RecipeDocument } from '../../shared/schemas/recipe';
 import type { VersionSummary } from '../../shared/schemas/recipes-api';
 import { HttpError } from '../http-error';
 
-export function computeAuthoritative(doc: RecipeDocument, pathPrefix = ''): RecipeResult {
+/** The engine with the tubes' calibration in force (applied only if the recipe opts in). */
+export function computeAuthoritative(doc: RecipeDocument, tubeFactors: TubeFactors, pathPrefix = ''): RecipeResult {
   try {
-    return computeRecipe(doc);
+    return computeRecipe(doc, { tubeFactors });
   } catch (e) {
     if (e instanceof EngineInputError) {
       throw new HttpError(422, 'engine_input', e.message, [{ path: pathPrefix + e.path, message: e.message }]);

@@ -24,6 +24,7 @@ import { recordAudit, type Tx } from './audit.service';
 import { computeAuthoritative, summarize } from './compute.service';
 import { contentHash } from './content-hash';
 import { listTubes } from './tubes.service';
+import { activeTubeFactors } from './calibrations.service';
 
 export type Actor = { id: number; role: Role };
 
@@ -151,8 +152,8 @@ export async function getVersion(db: Db, viewer: Actor, id: number): Promise<Rec
 }
 
 /** Columns a version stores beside its document: the authoritative result and its hash. */
-function computedColumns(document: RecipeDocument) {
-  const result = computeAuthoritative(document, 'document.');
+async function computedColumns(db: Db, document: RecipeDocument) {
+  const result = computeAuthoritative(document, await activeTubeFactors(db), 'document.');
   return {
     document,
     result,
@@ -196,7 +197,7 @@ export async function createRecipe(
   actor: Actor,
   input: { name: string; description: string; document?: RecipeDocument },
 ): Promise<RecipeDetail> {
-  const columns = computedColumns(input.document ?? newRecipeDocument());
+  const columns = await computedColumns(db, input.document ?? newRecipeDocument());
   const id = await db.transaction(async (tx) => {
     const [same] = await tx.select({ id: recipes.id }).from(recipes).where(eq(recipes.name, input.name)).limit(1);
     if (same) throw conflict(`A recipe named ${input.name} already exists`);
@@ -245,7 +246,7 @@ export async function saveDraft(
   id: number,
   input: { revision: number; document: RecipeDocument; note: string },
 ): Promise<RecipeVersion> {
-  const columns = computedColumns(input.document);
+  const columns = await computedColumns(db, input.document);
   await db.transaction(async (tx) => {
     const [v] = await tx.select().from(recipeVersions).where(eq(recipeVersions.id, id)).limit(1).for('update');
     if (!v) throw notFound('The recipe version');
@@ -278,7 +279,7 @@ export async function saveDraft(
 /** "New version from this one": copies any version into the recipe's next draft. */
 export async function copyVersion(db: Db, actor: Actor, id: number, note: string): Promise<RecipeVersion> {
   const source = await getVersion(db, actor, id);
-  const columns = computedColumns(source.document);
+  const columns = await computedColumns(db, source.document);
   const newId = await db.transaction(async (tx) => {
     // Lock the recipe row so two copies at once get distinct numbers.
     await tx.select({ id: recipes.id }).from(recipes).where(eq(recipes.id, source.recipeId)).for('update');

@@ -17,6 +17,7 @@ import type { Mailer } from './mail/outbox.service';
 import { queueMail } from './mail/outbox.service';
 import { refreshRecipeListColumns, type Actor } from './recipes.service';
 import { listTubes } from './tubes.service';
+import { activeTubeFactors } from './calibrations.service';
 import { confirmPassword } from './users.service';
 
 type VersionRow = typeof recipeVersions.$inferSelect;
@@ -55,6 +56,7 @@ const versionLink = (appUrl: string, v: VersionRow) => `${appUrl}/recipes/${v.re
 /** Author (or a lead) sends a draft for review; refused while tube rules or the engine object. */
 export async function submitVersion(db: Db, mailer: Mailer | undefined, actor: Actor, id: number, note: string): Promise<void> {
   const tubes = await listTubes(db);
+  const factors = await activeTubeFactors(db);
   await db.transaction(async (tx) => {
     const { v, recipeName } = await lockVersion(tx, id);
     requireState(v, 'draft', 'submitted');
@@ -65,7 +67,7 @@ export async function submitVersion(db: Db, mailer: Mailer | undefined, actor: A
       throw new HttpError(422, 'tube_rules', 'Steps break their tubes\u2019 rules; fix them before submitting', tubeIssues.map(({ path, message }) => ({ path, message })));
     }
     // Recompute so the lead reviews what the current engine predicts.
-    const result = computeAuthoritative(document, 'document.');
+    const result = computeAuthoritative(document, factors, 'document.');
     await tx
       .update(recipeVersions)
       .set({ state: 'in_review', submittedAt: new Date(), result, summary: summarize(result), engineVersion: result.engineVersion, parameterSetId: result.parameterSetId, reviewComment: null, ...(note ? { note } : {}) })

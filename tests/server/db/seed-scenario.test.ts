@@ -2,7 +2,7 @@ import { describe, expect, it, inject } from 'vitest';
 import { connectDatabase } from '../../../server/db/index';
 import { seedDemo } from '../../../server/db/seed';
 import { seedScenario } from '../../../server/db/seed-scenario';
-import { lots, recipes, recipeVersions } from '../../../server/db/schema';
+import { calibrations, lots, measurements, recipes, recipeVersions } from '../../../server/db/schema';
 import { resetDatabase } from '../../support/test-app';
 
 describe('demo scenario seed', () => {
@@ -17,7 +17,9 @@ describe('demo scenario seed', () => {
     const states = new Set((await database.db.select().from(recipeVersions)).map((v) => v.state));
     expect(states).toEqual(new Set(['draft', 'in_review', 'released', 'retired']));
     expect(all.some((r) => r.latestVersionNo >= 3)).toBe(true);
-    expect(await database.db.select().from(lots)).toHaveLength(3);
+    expect(await database.db.select().from(lots)).toHaveLength(4);
+    expect(await database.db.select().from(measurements)).toHaveLength(6);
+    expect(await database.db.select().from(calibrations)).toHaveLength(1);
     expect((await seedScenario(database.db)).created).toBe(0);
     expect(await database.db.select().from(recipes)).toHaveLength(5);
     await database.close();

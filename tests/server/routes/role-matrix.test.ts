@@ -43,6 +43,11 @@ const MATRIX: Record<string, Access> = {
   'GET /api/lots/:id': ALL,
   'PATCH /api/lots/:id': ['operator', 'engineer'],
   'GET /api/lots/:id/traveller.pdf': ALL,
+  'GET /api/lots/:id/measurements': ALL,
+  'POST /api/lots/:id/measurements': ['operator', 'engineer'],
+  'GET /api/tubes/:id/calibrations': ALL,
+  'POST /api/tubes/:id/calibrations': ['engineer', 'lead'],
+  'GET /api/calibrations/active': ALL,
 };
 
 const ctx = useTestApp();
