@@ -86,6 +86,13 @@ function substrateLine(doc: RecipeDocument, result: RecipeResult | null): string
   return `${s.type}-type Si <${s.orientation}>, ${bg}${'concentration' in s.background ? rho : ''}`;
 }
 
+/** Says on paper when the prediction used tube calibration, and which factors. */
+function calibrationNote(result: RecipeResult | null, tubeNames: Map<number, string>): string | null {
+  if (!result?.calibration?.optedIn) return null;
+  if (result.calibration.factors.length === 0) return 'Opted into tube calibration; no tube of this recipe has a fit yet';
+  return result.calibration.factors.map((f) => `${tubeNames.get(f.tubeId) ?? `tube ${f.tubeId}`}: D × ${f.factor.toFixed(3)}`).join('; ');
+}
+
 export interface TravellerContext {
   version: RecipeVersion;
   lot: { lotCode: string; wafers: number; tubeName: string; openedBy: string; openedAt: string } | null;
@@ -107,7 +114,7 @@ export function travellerInput(ctx: TravellerContext): TravellerInput {
       state: v.state,
       parameterSetLabel: result?.parameterSetLabel ?? v.parameterSetId ?? 'unknown',
       engineVersion: v.engineVersion ?? 'unknown',
-      calibrationNote: null,
+      calibrationNote: calibrationNote(result, ctx.tubeNames),
     },
     release: v.state === 'released' && v.releasedBy && v.releasedAt ? { signedBy: v.releasedBy.name, signedAt: stamp(v.releasedAt), meaning } : null,
     lot: ctx.lot ? { lotId: ctx.lot.lotCode, wafers: ctx.lot.wafers, tubeName: ctx.lot.tubeName, openedBy: ctx.lot.openedBy, openedAt: stamp(ctx.lot.openedAt) } : null,
