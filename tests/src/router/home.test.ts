@@ -7,10 +7,13 @@ const canAs = (role: Role) => (roles: readonly Role[]) => roles.includes(role);
 
 describe('navigation from the route table', () => {
   it.each([
-    { role: 'engineer' as const, names: ['tubes'] },
-    { role: 'lead' as const, names: ['tubes'] },
-    { role: 'operator' as const, names: ['tubes'] },
-    { role: 'admin' as const, names: ['tubes', 'people'] },
+    { role: 'engineer' as const, names: ['bench', 'lots', 'recipes', 'compare', 'tubes', 'calibration'] },
+    { role: 'lead' as const, names: ['bench', 'lots', 'recipes', 'compare', 'sign-off', 'tubes', 'calibration', 'audit'] },
+    { role: 'operator' as const, names: ['lots', 'recipes', 'tubes'] },
+    {
+      role: 'admin' as const,
+      names: ['bench', 'lots', 'recipes', 'compare', 'sign-off', 'tubes', 'calibration', 'people', 'audit', 'outbox'],
+    },
   ])('shows $role only the screens the role may open', ({ role, names }) => {
     expect(navRoutes(routes, canAs(role)).map((r) => r.name)).toEqual(names);
   });

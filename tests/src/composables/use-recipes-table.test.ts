@@ -1,0 +1,32 @@
+import { describe, expect, it } from 'vitest';
+import { listRecipesQuerySchema } from '../../../shared/schemas/recipes-api';
+import { toListQuery, type RecipeFilters } from '../../../src/composables/use-recipes-table';
+import { recipesQueryString } from '../../../src/api/recipes';
+
+const none: RecipeFilters = { name: '', dopant: null, state: null, ownerId: null, tubeId: null };
+
+describe('toListQuery', () => {
+  it('turns the table position into a 1-based page and the sort into field and order', () => {
+    expect(toListQuery({ first: 40, rows: 20, sortField: 'name', sortOrder: 1 }, none)).toEqual({
+      page: 3,
+      pageSize: 20,
+      sort: 'name',
+      order: 'asc',
+    });
+  });
+
+  it('falls back to the last change, newest first, for a column the server cannot sort', () => {
+    expect(toListQuery({ first: 0, rows: 10, sortField: 'dopants', sortOrder: -1 }, none)).toMatchObject({ sort: 'updatedAt', order: 'desc' });
+  });
+
+  it('sends only the filters that are set, with the name trimmed', () => {
+    const q = toListQuery({ first: 0, rows: 20, sortField: 'updatedAt', sortOrder: -1 }, { name: '  boron ', dopant: 'B', state: null, ownerId: 4, tubeId: null });
+    expect(q).toEqual({ page: 1, pageSize: 20, sort: 'updatedAt', order: 'desc', name: 'boron', dopant: 'B', ownerId: 4 });
+  });
+
+  it('produces a query string the server schema accepts as it is', () => {
+    const q = toListQuery({ first: 20, rows: 10, sortField: 'owner', sortOrder: 1 }, { ...none, state: 'released', tubeId: 2 });
+    const params = Object.fromEntries(new URLSearchParams(recipesQueryString(q).slice(1)));
+    expect(listRecipesQuerySchema.parse(params)).toEqual({ page: 3, pageSize: 10, sort: 'owner', order: 'asc', state: 'released', tubeId: 2 });
+  });
+});
