@@ -17,16 +17,77 @@ export const routes: RouteRecordRaw[] = [
     meta: { title: 'Sign in', roles: 'public' },
   },
   {
+    path: '/bench',
+    name: 'bench',
+    component: () => import('../views/BenchView.vue'),
+    meta: { title: 'Bench', roles: ['engineer', 'lead', 'admin'], nav: { label: 'Bench', icon: 'pi pi-home' } },
+  },
+  // Lots come before Recipes so that an operator's home (first nav route) is Lots.
+  {
+    path: '/lots',
+    name: 'lots',
+    component: () => import('../views/LotsView.vue'),
+    meta: { title: 'Lots', roles: ROLES, nav: { label: 'Lots', icon: 'pi pi-box' } },
+  },
+  {
+    path: '/lots/:id(\\d+)',
+    name: 'lot',
+    component: () => import('../views/LotDetailView.vue'),
+    meta: { title: 'Lot', roles: ROLES },
+  },
+  {
+    path: '/recipes',
+    name: 'recipes',
+    component: () => import('../views/RecipesView.vue'),
+    meta: { title: 'Recipes', roles: ROLES, nav: { label: 'Recipes', icon: 'pi pi-list' } },
+  },
+  {
+    path: '/recipes/:id(\\d+)',
+    name: 'recipe',
+    component: () => import('../views/RecipeWorkspaceView.vue'),
+    meta: { title: 'Recipe', roles: ROLES },
+  },
+  {
+    path: '/compare',
+    name: 'compare',
+    component: () => import('../views/CompareView.vue'),
+    meta: { title: 'Compare', roles: ['engineer', 'lead', 'admin'], nav: { label: 'Compare', icon: 'pi pi-arrows-h' } },
+  },
+  {
+    path: '/sign-off',
+    name: 'sign-off',
+    component: () => import('../views/SignoffView.vue'),
+    meta: { title: 'Sign-off', roles: ['lead', 'admin'], nav: { label: 'Sign-off', icon: 'pi pi-verified' } },
+  },
+  {
     path: '/tubes',
     name: 'tubes',
     component: () => import('../views/TubesView.vue'),
     meta: { title: 'Tubes', roles: ROLES, nav: { label: 'Tubes', icon: 'pi pi-sliders-h' } },
   },
   {
+    path: '/calibration',
+    name: 'calibration',
+    component: () => import('../views/CalibrationView.vue'),
+    meta: { title: 'Calibration', roles: ['engineer', 'lead', 'admin'], nav: { label: 'Calibration', icon: 'pi pi-chart-scatter' } },
+  },
+  {
     path: '/people',
     name: 'people',
     component: () => import('../views/PeopleView.vue'),
     meta: { title: 'People', roles: ['admin'], nav: { label: 'People', icon: 'pi pi-users' } },
+  },
+  {
+    path: '/audit',
+    name: 'audit',
+    component: () => import('../views/AuditTrailView.vue'),
+    meta: { title: 'Audit trail', roles: ['admin', 'lead'], nav: { label: 'Audit trail', icon: 'pi pi-history' } },
+  },
+  {
+    path: '/outbox',
+    name: 'outbox',
+    component: () => import('../views/OutboxView.vue'),
+    meta: { title: 'Outbox', roles: ['admin'], nav: { label: 'Outbox', icon: 'pi pi-envelope' } },
   },
   {
     path: '/not-allowed',
