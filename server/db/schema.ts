@@ -92,6 +92,9 @@ export const recipes = mysqlTable(
     dopants: varchar('dopants', { length: 40 }).notNull().default(''),
     /** Tube ids of the newest version, e.g. ",3,4,". */
     tubeIds: varchar('tube_ids', { length: 255 }).notNull().default(''),
+    /** The same of the released version: what operators (who see no drafts) list and filter by. */
+    releasedDopants: varchar('released_dopants', { length: 40 }).notNull().default(''),
+    releasedTubeIds: varchar('released_tube_ids', { length: 255 }).notNull().default(''),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },

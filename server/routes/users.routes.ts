@@ -2,7 +2,7 @@ import { idParam } from '../../shared/schemas/api';
 import { createUserSchema, patchUserSchema } from '../../shared/schemas/users';
 import type { Db } from '../db/index';
 import { parseBody, parseParams } from '../middleware/validate';
-import { createUser, listUsers, patchUser } from '../services/users.service';
+import { createUser, listPeopleDirectory, listUsers, patchUser } from '../services/users.service';
 import { defineRoutes } from './define-routes';
 
 export function usersRoutes(db: Db) {
@@ -10,6 +10,10 @@ export function usersRoutes(db: Db) {
 
   r.get('/', ['admin'], async (_req, res) => {
     res.json({ data: await listUsers(db) });
+  });
+
+  r.get('/directory', 'signed-in', async (_req, res) => {
+    res.json({ data: await listPeopleDirectory(db) });
   });
 
   r.post('/', ['admin'], async (req, res) => {

@@ -1,6 +1,7 @@
 // Lots: a number of wafers run in a tube against one released version.
 import { and, desc, eq, type SQL } from 'drizzle-orm';
 import type { CreateLotInput, Lot, LotStatus } from '../../shared/schemas/lots';
+import { LOT_STATUS_LABELS, LOT_STATUS_MOVES } from '../../shared/schemas/lots';
 import { createLotSchema } from '../../shared/schemas/lots';
 import type { Db } from '../db/index';
 import { lots, recipes, recipeVersions, tubes, users } from '../db/schema';
@@ -93,6 +94,11 @@ export async function patchLot(db: Db, actor: Actor, id: number, input: { status
   await db.transaction(async (tx) => {
     const [l] = await tx.select().from(lots).where(eq(lots.id, id)).limit(1).for('update');
     if (!l) throw notFound('The lot');
+    if (input.status && input.status !== l.status && !LOT_STATUS_MOVES[l.status].includes(input.status)) {
+      throw new HttpError(409, 'wrong_state', `A lot that is ${LOT_STATUS_LABELS[l.status].toLowerCase()} cannot become ${LOT_STATUS_LABELS[input.status].toLowerCase()}`, [
+        { path: 'status', message: `Allowed from ${LOT_STATUS_LABELS[l.status].toLowerCase()}: ${LOT_STATUS_MOVES[l.status].map((s) => LOT_STATUS_LABELS[s].toLowerCase()).join(', ') || 'none'}` },
+      ]);
+    }
     await tx.update(lots).set(input).where(eq(lots.id, id));
     await recordAudit(tx, {
       actor,

@@ -1,6 +1,6 @@
 // Recipes and their numbered versions. A draft saves with optimistic
 // concurrency; a version that has left Draft never changes again here.
-import { and, asc, count, desc, eq, inArray, like, max, sql, type SQL } from 'drizzle-orm';
+import { and, asc, count, desc, eq, gte, inArray, like, lt, max, sql, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/mysql-core';
 import type { Dopant } from '../../shared/engine/dopants';
 import type { RecipeResult } from '../../shared/engine/types';
@@ -35,14 +35,16 @@ const canSeeState = (viewer: Actor, state: VersionState) => viewer.role !== 'ope
 const splitList = (s: string) => s.split(',').filter(Boolean);
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
-function recipeRow(r: typeof recipes.$inferSelect, ownerName: string): RecipeListRow {
+/** A recipe as a list row; operators see the released version's dopants and tubes, never a draft's. */
+function recipeRow(r: typeof recipes.$inferSelect, ownerName: string, viewer?: Actor): RecipeListRow {
+  const releasedOnly = viewer?.role === 'operator';
   return {
     id: r.id,
     name: r.name,
     description: r.description,
     owner: { id: r.ownerId, name: ownerName },
-    dopants: splitList(r.dopants) as Dopant[],
-    tubeIds: splitList(r.tubeIds).map(Number),
+    dopants: splitList(releasedOnly ? r.releasedDopants : r.dopants) as Dopant[],
+    tubeIds: splitList(releasedOnly ? r.releasedTubeIds : r.tubeIds).map(Number),
     latestVersionNo: r.latestVersionNo,
     latestState: r.latestState,
     releasedVersionNo: r.releasedVersionNo,
@@ -54,8 +56,11 @@ export async function listRecipes(db: Db, viewer: Actor, rawQuery: ListRecipesQu
   const q = listRecipesQuerySchema.parse(rawQuery);
   const where: SQL[] = [];
   if (q.name) where.push(like(recipes.name, `%${q.name.replace(/[\\%_]/g, (c) => `\\${c}`)}%`));
-  if (q.dopant) where.push(like(recipes.dopants, `%,${q.dopant},%`));
-  if (q.tubeId) where.push(like(recipes.tubeIds, `%,${q.tubeId},%`));
+  const operator = viewer.role === 'operator';
+  if (q.dopant) where.push(like(operator ? recipes.releasedDopants : recipes.dopants, `%,${q.dopant},%`));
+  if (q.tubeId) where.push(like(operator ? recipes.releasedTubeIds : recipes.tubeIds, `%,${q.tubeId},%`));
+  if (q.changedFrom) where.push(gte(recipes.updatedAt, new Date(`${q.changedFrom}T00:00:00Z`)));
+  if (q.changedTo) where.push(lt(recipes.updatedAt, new Date(new Date(`${q.changedTo}T00:00:00Z`).getTime() + 86_400_000)));
   if (q.state) where.push(eq(recipes.latestState, q.state));
   if (q.ownerId) where.push(eq(recipes.ownerId, q.ownerId));
   if (viewer.role === 'operator') where.push(sql`${recipes.releasedVersionNo} IS NOT NULL`);
@@ -72,7 +77,7 @@ export async function listRecipes(db: Db, viewer: Actor, rawQuery: ListRecipesQu
       .offset((q.page - 1) * q.pageSize),
     db.select({ total: count() }).from(recipes).innerJoin(users, eq(users.id, recipes.ownerId)).where(condition),
   ]);
-  return { rows: rows.map((x) => recipeRow(x.r, x.ownerName)), total, page: q.page, pageSize: q.pageSize };
+  return { rows: rows.map((x) => recipeRow(x.r, x.ownerName, viewer)), total, page: q.page, pageSize: q.pageSize };
 }
 
 export async function getRecipe(db: Db, viewer: Actor, id: number): Promise<RecipeDetail> {
@@ -94,7 +99,7 @@ export async function getRecipe(db: Db, viewer: Actor, id: number): Promise<Reci
     )
     .orderBy(desc(recipeVersions.versionNo));
   return {
-    ...recipeRow(row.r, row.ownerName),
+    ...recipeRow(row.r, row.ownerName, viewer),
     versions: versions.map(({ v, authorName }) => ({
       id: v.id,
       versionNo: v.versionNo,
@@ -164,6 +169,13 @@ async function computedColumns(db: Db, document: RecipeDocument) {
   };
 }
 
+/** Dopants and tube ids of a document as ",B,P," lists (commas around each for LIKE filters). */
+function listColumns(doc: RecipeDocument): { dopants: string; tubeIds: string } {
+  const dopants = [...new Set(doc.steps.flatMap((s) => ('dopant' in s ? [s.dopant] : [])))];
+  const tubeIds = [...new Set(doc.steps.flatMap((s) => (s.tubeId ? [s.tubeId] : [])))];
+  return { dopants: dopants.length ? `,${dopants.join(',')},` : '', tubeIds: tubeIds.length ? `,${tubeIds.join(',')},` : '' };
+}
+
 /** Keeps the recipe's list columns in step with its newest and released versions. */
 export async function refreshRecipeListColumns(tx: Tx, recipeId: number): Promise<void> {
   const [latest] = await tx
@@ -173,20 +185,23 @@ export async function refreshRecipeListColumns(tx: Tx, recipeId: number): Promis
     .orderBy(desc(recipeVersions.versionNo))
     .limit(1);
   const [released] = await tx
-    .select({ no: max(recipeVersions.versionNo) })
+    .select({ versionNo: recipeVersions.versionNo, document: recipeVersions.document })
     .from(recipeVersions)
-    .where(and(eq(recipeVersions.recipeId, recipeId), eq(recipeVersions.state, 'released')));
-  const doc = latest.document as RecipeDocument;
-  const dopants = [...new Set(doc.steps.flatMap((s) => ('dopant' in s ? [s.dopant] : [])))];
-  const tubeIds = [...new Set(doc.steps.flatMap((s) => (s.tubeId ? [s.tubeId] : [])))];
+    .where(and(eq(recipeVersions.recipeId, recipeId), eq(recipeVersions.state, 'released')))
+    .orderBy(desc(recipeVersions.versionNo))
+    .limit(1);
+  const latestLists = listColumns(latest.document as RecipeDocument);
+  const releasedLists = released ? listColumns(released.document as RecipeDocument) : { dopants: '', tubeIds: '' };
   await tx
     .update(recipes)
     .set({
       latestVersionNo: latest.versionNo,
       latestState: latest.state,
-      releasedVersionNo: released?.no ?? null,
-      dopants: dopants.length ? `,${dopants.join(',')},` : '',
-      tubeIds: tubeIds.length ? `,${tubeIds.join(',')},` : '',
+      releasedVersionNo: released?.versionNo ?? null,
+      dopants: latestLists.dopants,
+      tubeIds: latestLists.tubeIds,
+      releasedDopants: releasedLists.dopants,
+      releasedTubeIds: releasedLists.tubeIds,
       updatedAt: new Date(),
     })
     .where(eq(recipes.id, recipeId));
@@ -217,7 +232,7 @@ export async function createRecipe(
       entityId: versionId,
       toState: 'draft',
       contentHash: columns.contentHash,
-      details: { recipeId, name: input.name },
+      details: { recipeId, versionNo: 1, name: input.name },
     });
     return recipeId;
   });
@@ -270,7 +285,7 @@ export async function saveDraft(
       entityType: 'recipe_version',
       entityId: id,
       contentHash: columns.contentHash,
-      details: { revision: v.revision + 1 },
+      details: { recipeId: v.recipeId, versionNo: v.versionNo, revision: v.revision + 1 },
     });
   });
   return getVersion(db, actor, id);
@@ -306,7 +321,7 @@ export async function copyVersion(db: Db, actor: Actor, id: number, note: string
       entityId: versionId,
       toState: 'draft',
       contentHash: columns.contentHash,
-      details: { from: source.id, fromVersionNo: source.versionNo },
+      details: { recipeId: source.recipeId, versionNo: (top ?? 0) + 1, from: source.id, fromVersionNo: source.versionNo },
     });
     return versionId;
   });

@@ -73,7 +73,7 @@ export async function submitVersion(db: Db, mailer: Mailer | undefined, actor: A
       .set({ state: 'in_review', submittedAt: new Date(), result, summary: summarize(result), engineVersion: result.engineVersion, parameterSetId: result.parameterSetId, reviewComment: null, ...(note ? { note } : {}) })
       .where(eq(recipeVersions.id, id));
     await refreshRecipeListColumns(tx, v.recipeId);
-    await recordAudit(tx, { actor, action: 'version.submit', entityType: 'recipe_version', entityId: id, fromState: 'draft', toState: 'in_review', comment: note || null, contentHash: v.contentHash });
+    await recordAudit(tx, { actor, action: 'version.submit', entityType: 'recipe_version', entityId: id, fromState: 'draft', toState: 'in_review', comment: note || null, contentHash: v.contentHash, details: { recipeId: v.recipeId, versionNo: v.versionNo } });
     const appUrl = mailer?.appUrl ?? '';
     await queueMail(tx, [
       {
@@ -110,14 +110,14 @@ export async function signOffVersion(
       .for('update');
     for (const old of superseded) {
       await tx.update(recipeVersions).set({ state: 'retired', retiredAt: now }).where(eq(recipeVersions.id, old.id));
-      await recordAudit(tx, { actor, action: 'version.retire', entityType: 'recipe_version', entityId: old.id, fromState: 'released', toState: 'retired', comment: `Superseded by version ${v.versionNo}`, contentHash: old.contentHash });
+      await recordAudit(tx, { actor, action: 'version.retire', entityType: 'recipe_version', entityId: old.id, fromState: 'released', toState: 'retired', comment: `Superseded by version ${v.versionNo}`, contentHash: old.contentHash, details: { recipeId: v.recipeId, versionNo: old.versionNo } });
     }
     await tx
       .update(recipeVersions)
       .set({ state: 'released', releasedAt: now, releasedById: actor.id, releaseMeaning: input.meaning })
       .where(eq(recipeVersions.id, id));
     await refreshRecipeListColumns(tx, v.recipeId);
-    await recordAudit(tx, { actor, action: 'version.release', entityType: 'recipe_version', entityId: id, fromState: 'in_review', toState: 'released', comment: SIGNATURE_MEANING_LABELS[input.meaning], contentHash: v.contentHash, details: { meaning: input.meaning } });
+    await recordAudit(tx, { actor, action: 'version.release', entityType: 'recipe_version', entityId: id, fromState: 'in_review', toState: 'released', comment: SIGNATURE_MEANING_LABELS[input.meaning], contentHash: v.contentHash, details: { recipeId: v.recipeId, versionNo: v.versionNo, meaning: input.meaning } });
     const appUrl = mailer?.appUrl ?? '';
     await queueMail(tx, [
       {
@@ -142,7 +142,7 @@ export async function returnVersion(db: Db, mailer: Mailer | undefined, actor: A
       .set({ state: 'draft', reviewComment: comment, submittedAt: null, revision: v.revision + 1 })
       .where(eq(recipeVersions.id, id));
     await refreshRecipeListColumns(tx, v.recipeId);
-    await recordAudit(tx, { actor, action: 'version.return', entityType: 'recipe_version', entityId: id, fromState: 'in_review', toState: 'draft', comment, contentHash: v.contentHash });
+    await recordAudit(tx, { actor, action: 'version.return', entityType: 'recipe_version', entityId: id, fromState: 'in_review', toState: 'draft', comment, contentHash: v.contentHash, details: { recipeId: v.recipeId, versionNo: v.versionNo } });
     const appUrl = mailer?.appUrl ?? '';
     await queueMail(tx, [
       {
@@ -163,7 +163,7 @@ export async function retireVersion(db: Db, actor: Actor, id: number, comment: s
     requireState(v, 'released', 'retired');
     await tx.update(recipeVersions).set({ state: 'retired', retiredAt: new Date() }).where(eq(recipeVersions.id, id));
     await refreshRecipeListColumns(tx, v.recipeId);
-    await recordAudit(tx, { actor, action: 'version.retire', entityType: 'recipe_version', entityId: id, fromState: 'released', toState: 'retired', comment: comment || null, contentHash: v.contentHash });
+    await recordAudit(tx, { actor, action: 'version.retire', entityType: 'recipe_version', entityId: id, fromState: 'released', toState: 'retired', comment: comment || null, contentHash: v.contentHash, details: { recipeId: v.recipeId, versionNo: v.versionNo } });
   });
 }
 

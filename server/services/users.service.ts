@@ -1,5 +1,5 @@
 import { and, asc, eq } from 'drizzle-orm';
-import type { CreateUserInput, PatchUserInput, Role, User } from '../../shared/schemas/users';
+import type { CreateUserInput, PatchUserInput, PersonSummary, Role, User } from '../../shared/schemas/users';
 import type { Db } from '../db/index';
 import { users } from '../db/schema';
 import { conflict, notFound } from '../http-error';
@@ -46,6 +46,11 @@ export async function confirmPassword(db: Db, id: number, password: string): Pro
 export async function listUsers(db: Db): Promise<User[]> {
   const rows = await db.select().from(users).orderBy(asc(users.name));
   return rows.map(toUser);
+}
+
+/** Names and roles of everyone, for filters and pickers (no e-mail addresses). */
+export async function listPeopleDirectory(db: Db): Promise<PersonSummary[]> {
+  return db.select({ id: users.id, name: users.name, role: users.role, active: users.active }).from(users).orderBy(asc(users.name));
 }
 
 export async function getUser(db: Db, id: number): Promise<User> {

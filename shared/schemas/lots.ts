@@ -9,6 +9,14 @@ export const LOT_STATUS_LABELS: Record<LotStatus, string> = {
   scrapped: 'Scrapped',
 };
 
+/** The moves a lot's status may make: forward through the run, or scrapped before it ends. */
+export const LOT_STATUS_MOVES: Record<LotStatus, readonly LotStatus[]> = {
+  open: ['in_progress', 'scrapped'],
+  in_progress: ['complete', 'scrapped'],
+  complete: [],
+  scrapped: [],
+};
+
 export const lotCodeSchema = z
   .string()
   .trim()

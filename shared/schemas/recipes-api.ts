@@ -57,6 +57,9 @@ export const listRecipesQuerySchema = z.object({
   state: z.enum(VERSION_STATES).optional(),
   ownerId: z.coerce.number().int().positive().optional(),
   tubeId: z.coerce.number().int().positive().optional(),
+  /** Last change on or after / on or before these days (UTC). */
+  changedFrom: z.iso.date({ error: 'Use a date (YYYY-MM-DD)' }).optional(),
+  changedTo: z.iso.date({ error: 'Use a date (YYYY-MM-DD)' }).optional(),
 });
 export type ListRecipesQuery = z.input<typeof listRecipesQuerySchema>;
 

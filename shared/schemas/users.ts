@@ -23,6 +23,14 @@ export interface User {
   updatedAt: string;
 }
 
+/** What every signed-in person may know of the others (for filters and names). */
+export interface PersonSummary {
+  id: number;
+  name: string;
+  role: Role;
+  active: boolean;
+}
+
 export const signInSchema = z.object({
   email: emailSchema,
   password: z.string().min(1, 'Enter your password').max(200),

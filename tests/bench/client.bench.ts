@@ -1,3 +1,4 @@
+/// <reference lib="dom" />
 // Client budgets, printed (never failing):
 //  1. initial JavaScript gzip (the entry chunk and the static imports index.html
 //     preloads) against 250 KB, and the lazy Plotly chunk on its own;

@@ -18,10 +18,10 @@ const base = () => inject('baseUrl');
 /** The demo recipe whose newest version is the engineer's draft (demo scenario). */
 async function baseDiffusion(page: Page): Promise<{ recipeId: number; draftId: number }> {
   return page.evaluate(async () => {
-    const list = await (await fetch('/api/recipes?name=Base%20diffusion')).json();
+    const list = (await (await fetch('/api/recipes?name=Base%20diffusion')).json()) as { data: { rows: Array<{ id: number }> } };
     const recipe = list.data.rows[0];
-    const detail = await (await fetch(`/api/recipes/${recipe.id}`)).json();
-    const draft = detail.data.versions.find((v: { state: string }) => v.state === 'draft');
+    const detail = (await (await fetch(`/api/recipes/${recipe.id}`)).json()) as { data: { versions: Array<{ id: number; state: string }> } };
+    const draft = detail.data.versions.find((v) => v.state === 'draft')!;
     return { recipeId: recipe.id, draftId: draft.id };
   });
 }

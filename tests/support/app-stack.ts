@@ -15,6 +15,8 @@ import { seedDemo } from '../../server/db/seed';
 import { seedScenario } from '../../server/db/seed-scenario';
 import { freePort } from './free-port';
 import { TEST_CONFIG } from './test-config';
+import { createMailer } from '../../server/services/mail/outbox.service';
+import { startSmtpFake } from '../../server/services/mail/smtp-fake';
 
 export interface AppStack {
   baseUrl: string;
@@ -35,12 +37,14 @@ export async function startAppStack(): Promise<AppStack> {
   await runMigrations(database.db);
   await seedDemo(database.db);
   await seedScenario(database.db);
-  const created = createApp(database, { ...TEST_CONFIG, clientDir });
+  const smtp = await startSmtpFake();
+  const baseUrl = `http://127.0.0.1:${appPort}`;
+  const created = createApp(database, { ...TEST_CONFIG, clientDir }, { mailer: createMailer(smtp.url, 'Tubewright <tubewright@pilotline.example>', baseUrl) });
   const server: Server = await new Promise((ok) => {
     const s = created.app.listen(appPort, '127.0.0.1', () => ok(s));
   });
   return {
-    baseUrl: `http://127.0.0.1:${appPort}`,
+    baseUrl,
     databaseUrl: mariadb.url,
     clientDir,
     async stop() {
@@ -48,6 +52,7 @@ export async function startAppStack(): Promise<AppStack> {
       await new Promise<void>((ok) => server.close(() => ok()));
       await created.close();
       await database.close();
+      await smtp.stop();
       await mariadb.stop();
       rmSync(dir, { recursive: true, force: true });
     },

@@ -77,6 +77,11 @@ describe('lots', () => {
     const res = await operator.patch(`/api/lots/${lot.id}`).send({ status: 'in_progress' });
     expect(res.body.data.status).toBe('in_progress');
     expect((await operator.patch(`/api/lots/${lot.id}`).send({ status: 'lost' })).status).toBe(400);
+    expect((await operator.patch(`/api/lots/${lot.id}`).send({ status: 'open' })).status).toBe(409);
+    expect((await operator.patch(`/api/lots/${lot.id}`).send({ status: 'complete' })).body.data.status).toBe('complete');
+    const back = await operator.patch(`/api/lots/${lot.id}`).send({ status: 'in_progress' });
+    expect(back.status).toBe(409);
+    expect(back.body.error.issues[0].path).toBe('status');
     expect((await operator.patch('/api/lots/99999').send({ status: 'complete' })).status).toBe(404);
   });
 });

@@ -99,6 +99,31 @@ describe('recipes', () => {
     expect((await operator.get(`/api/versions/${made.versions[0].id}`)).status).toBe(404);
   });
 
+  it('operators list and filter by the released version, never by a newer draft', async () => {
+    const made = await createRecipe(engineer, 'Released boron, phos draft');
+    const v1 = made.versions[0].id;
+    const lead = await ctx.signIn('lead');
+    await engineer.post(`/api/versions/${v1}/submit`).send({});
+    expect((await lead.post(`/api/versions/${v1}/sign-off`).send({ password: 'demo-lead-pass', meaning: 'approved-for-production' })).status).toBe(200);
+    const v2 = (await engineer.post(`/api/versions/${v1}/copy`).send({})).body.data;
+    v2.document.steps[0].dopant = 'P';
+    v2.document.steps[0].tubeId = tubes.phos;
+    expect((await engineer.put(`/api/versions/${v2.id}`).send({ revision: v2.revision, document: v2.document })).status).toBe(200);
+    const operator = await ctx.signIn('operator');
+    const row = (await operator.get('/api/recipes?name=phos%20draft')).body.data.rows[0];
+    expect(row.dopants).toEqual(['B']);
+    expect((await operator.get('/api/recipes?dopant=P&name=phos%20draft')).body.data.total).toBe(0);
+    expect((await engineer.get('/api/recipes?dopant=P&name=phos%20draft')).body.data.total).toBe(1);
+  });
+
+  it('filters by the day of the last change', async () => {
+    await createRecipe(engineer, 'Changed today');
+    const today = new Date().toISOString().slice(0, 10);
+    expect((await engineer.get(`/api/recipes?name=Changed%20today&changedFrom=${today}&changedTo=${today}`)).body.data.total).toBe(1);
+    expect((await engineer.get('/api/recipes?name=Changed%20today&changedTo=2020-01-01')).body.data.total).toBe(0);
+    expect((await engineer.get('/api/recipes?changedFrom=yesterday')).status).toBe(400);
+  });
+
   it('PATCH renames (owner or lead only)', async () => {
     const made = await createRecipe(engineer, 'To rename');
     const res = await engineer.patch(`/api/recipes/${made.id}`).send({ name: 'Renamed' });

@@ -13,6 +13,7 @@ const MATRIX: Record<string, Access> = {
   'GET /api/me': ALL,
   'GET /api/health': 'public',
   'GET /api/users': ['admin'],
+  'GET /api/users/directory': ALL,
   'POST /api/users': ['admin'],
   'PATCH /api/users/:id': ['admin'],
   'GET /api/tubes': ALL,

@@ -5,6 +5,16 @@ import { useTestApp } from '../../support/test-app';
 
 const ctx = useTestApp();
 
+describe('people directory', () => {
+  it.each(['engineer', 'lead', 'operator'] as const)('%s reads names and roles, without e-mail addresses', async (role) => {
+    const agent = await ctx.signIn(role);
+    const res = await agent.get('/api/users/directory');
+    expect(res.status).toBe(200);
+    expect(res.body.data.length).toBeGreaterThanOrEqual(6);
+    expect(Object.keys(res.body.data[0]).sort()).toEqual(['active', 'id', 'name', 'role']);
+  });
+});
+
 describe('people (admin)', () => {
   it('GET /api/users lists people without password hashes', async () => {
     const admin = await ctx.signIn('admin');
