@@ -160,7 +160,8 @@ export async function seedScenario(db: Db): Promise<{ created: number }> {
     for (const lot of r.lots) {
       if (!released) break;
       const made = await createLot(db, operator, { lotCode: lot.lotCode, wafers: lot.wafers, tubeId: t[lot.tube]!, versionId: released.id, notes: 'Demo lot (invented).' });
-      if (lot.status !== 'open') await patchLot(db, operator, made.id, { status: lot.status });
+      if (lot.status !== 'open') await patchLot(db, operator, made.id, { status: 'in_progress' });
+      if (lot.status === 'complete') await patchLot(db, operator, made.id, { status: 'complete' });
       if (lot.measured) await attachInventedMeasurements(db, operator, made.id, released.id, t[lot.tube]!);
     }
     created++;

@@ -29,20 +29,40 @@ export async function startAppStack(): Promise<AppStack> {
   const dir = mkdtempSync(join(tmpdir(), 'tw-stack-'));
   const clientDir = join(dir, 'client');
   const [dbPort, appPort] = [await freePort(), await freePort()];
-  const [mariadb] = await Promise.all([
+  const [db, built] = await Promise.allSettled([
     startLocalMariaDb({ dataDir: join(dir, 'db'), port: dbPort, installIfMissing: true, log: () => undefined }),
     build({ root: PROJECT_ROOT, logLevel: 'error', build: { outDir: clientDir, emptyOutDir: true } }),
   ]);
+  if (db.status === 'rejected' || built.status === 'rejected') {
+    if (db.status === 'fulfilled') await db.value.stop();
+    rmSync(dir, { recursive: true, force: true });
+    throw db.status === 'rejected' ? db.reason : (built as PromiseRejectedResult).reason;
+  }
+  const mariadb = db.value;
   const database = connectDatabase(mariadb.url, 5);
-  await runMigrations(database.db);
-  await seedDemo(database.db);
-  await seedScenario(database.db);
   const smtp = await startSmtpFake();
   const baseUrl = `http://127.0.0.1:${appPort}`;
-  const created = createApp(database, { ...TEST_CONFIG, clientDir }, { mailer: createMailer(smtp.url, 'Tubewright <tubewright@pilotline.example>', baseUrl) });
-  const server: Server = await new Promise((ok) => {
-    const s = created.app.listen(appPort, '127.0.0.1', () => ok(s));
-  });
+  const cleanUp = async () => {
+    await database.close();
+    await smtp.stop();
+    await mariadb.stop();
+    rmSync(dir, { recursive: true, force: true });
+  };
+  let created: ReturnType<typeof createApp>;
+  let server: Server;
+  try {
+    await runMigrations(database.db);
+    await seedDemo(database.db);
+    await seedScenario(database.db);
+    created = createApp(database, { ...TEST_CONFIG, clientDir }, { mailer: createMailer(smtp.url, 'Tubewright <tubewright@pilotline.example>', baseUrl) });
+    server = await new Promise((ok) => {
+      const s = created.app.listen(appPort, '127.0.0.1', () => ok(s));
+    });
+  } catch (e) {
+    // A failed start must not leave a MariaDB running behind the test run.
+    await cleanUp();
+    throw e;
+  }
   return {
     baseUrl,
     databaseUrl: mariadb.url,
@@ -51,10 +71,7 @@ export async function startAppStack(): Promise<AppStack> {
       server.closeAllConnections();
       await new Promise<void>((ok) => server.close(() => ok()));
       await created.close();
-      await database.close();
-      await smtp.stop();
-      await mariadb.stop();
-      rmSync(dir, { recursive: true, force: true });
+      await cleanUp();
     },
   };
 }
