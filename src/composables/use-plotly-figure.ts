@@ -10,6 +10,8 @@ type Trace = Record<string, unknown>;
 export interface ThemeColours {
   textColour: string;
   gridColour: string;
+  /** The theme's accent (PrimeVue primary), lighter in the dark theme. */
+  accentColour: string;
 }
 
 export interface Figure {
@@ -22,6 +24,7 @@ function themeColours(): ThemeColours {
   return {
     textColour: style.getPropertyValue('--p-text-color').trim() || '#1b2026',
     gridColour: style.getPropertyValue('--p-content-border-color').trim() || '#dce1e6',
+    accentColour: style.getPropertyValue('--p-primary-color').trim() || '#156b7a',
   };
 }
 

@@ -19,7 +19,11 @@ export function span(points: CalibrationPoint[]): [number, number] {
   return [Math.max(0, lo - pad), hi + pad];
 }
 
-export function calibrationFigure(points: CalibrationPoint[], factor: number, theme: { textColour: string; gridColour: string }): { data: Trace[]; layout: Trace } {
+export function calibrationFigure(
+  points: CalibrationPoint[],
+  factor: number,
+  theme: { textColour: string; gridColour: string; accentColour?: string },
+): { data: Trace[]; layout: Trace } {
   const [lo, hi] = span(points);
   const hover = (what: string) => `%{text}<br>${what} %{x:.4f} µm<br>measured %{y:.4f} µm<extra></extra>`;
   const data: Trace[] = [
@@ -41,7 +45,7 @@ export function calibrationFigure(points: CalibrationPoint[], factor: number, th
       x: points.map((p) => p.correctedUm),
       y: points.map((p) => p.measuredUm),
       text: points.map((p) => p.lotCode),
-      marker: { color: AFTER_COLOUR, size: 9, symbol: 'circle' },
+      marker: { color: theme.accentColour || AFTER_COLOUR, size: 9, symbol: 'circle' },
       hovertemplate: hover('corrected'),
     },
   ];
