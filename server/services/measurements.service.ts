@@ -4,6 +4,7 @@
 import { desc, eq } from 'drizzle-orm';
 import { summarizeProfile, summarizeSheet } from '../../shared/analysis/measured';
 import type { RecipeResult } from '../../shared/engine/types';
+import { DOPANTS } from '../../shared/engine/dopants';
 import type {
   LotComparison,
   Measurement,
@@ -47,8 +48,11 @@ export async function storeUpload(db: Db, actor: Actor, lotId: number, rawFields
   }
   const background = result?.substrate.backgroundCm3;
   if (fields.kind === 'profile' && background === undefined) throw new HttpError(409, 'no_prediction', 'The lot\u2019s recipe version has no stored result to compare with');
+  const species = DOPANTS.find((d) => d.toLowerCase() === parsed.declared.species?.trim().toLowerCase());
   const summary =
-    fields.kind === 'profile' ? summarizeProfile(parsed.points as ProfilePoints, background!) : summarizeSheet(parsed.points as SheetPoints);
+    fields.kind === 'profile'
+      ? { ...summarizeProfile(parsed.points as ProfilePoints, background!), ...(species ? { species } : {}) }
+      : summarizeSheet(parsed.points as SheetPoints);
   const id = await db.transaction(async (tx) => {
     const [{ id: mId }] = await tx
       .insert(measurements)

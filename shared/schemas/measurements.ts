@@ -46,6 +46,8 @@ export interface SheetPoints {
 }
 
 export interface ProfileSummary {
+  /** The dopant the file says it measured (`# species: B`), when it names one of ours. */
+  species?: 'B' | 'P' | 'As' | 'Sb';
   /** Depths where the measured concentration crosses the substrate background, µm. */
   junctionDepthsUm: number[];
   surfaceConcentrationCm3: number;

@@ -86,7 +86,9 @@ async function readBody(response: Response): Promise<unknown> {
 
 async function request<T>(method: string, url: string, body: unknown, options: RequestOptions = {}): Promise<T> {
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  // A FormData body (file uploads) sets its own multipart content type.
+  const isForm = body instanceof FormData;
+  if (body !== undefined && !isForm) headers['Content-Type'] = 'application/json';
 
   let response: Response;
   try {
@@ -94,7 +96,7 @@ async function request<T>(method: string, url: string, body: unknown, options: R
       method,
       headers,
       credentials: 'same-origin',
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : isForm ? body : JSON.stringify(body),
       signal: options.signal,
     });
   } catch (cause) {
@@ -122,5 +124,7 @@ export const apiPatch = <T>(url: string, body: unknown, options?: RequestOptions
   request<T>('PATCH', url, body, options);
 export const apiPut = <T>(url: string, body: unknown, options?: RequestOptions) =>
   request<T>('PUT', url, body, options);
+/** Multipart POST (a file and form fields); failures and 401 behave as for JSON calls. */
+export const apiPostForm = <T>(url: string, form: FormData, options?: RequestOptions) => request<T>('POST', url, form, options);
 export const apiDelete = <T = void>(url: string, options?: RequestOptions) =>
   request<T>('DELETE', url, undefined, options);

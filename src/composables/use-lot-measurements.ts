@@ -37,7 +37,8 @@ export function useLotMeasurements(lotId: () => number) {
   const measuredSeries = computed(() => {
     const m = shownProfile.value;
     if (!m) return null;
-    return { label: `measured · ${m.fileName} (${m.method})`, points: m.points as ProfilePoints, junctionsUm: (m.summary as ProfileSummary).junctionDepthsUm };
+    const summary = m.summary as ProfileSummary;
+    return { label: `measured · ${m.fileName} (${m.method})`, points: m.points as ProfilePoints, junctionsUm: summary.junctionDepthsUm, species: summary.species };
   });
   /** The newest four-point-probe set: the one the comparison uses. */
   const latestSheet = computed(() => {

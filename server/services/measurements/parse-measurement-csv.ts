@@ -20,7 +20,7 @@ const TO_CM3: Record<ConcentrationUnit, number> = { 'cm^-3': 1, 'm^-3': 1e-6 };
 const TO_OHM_SQ: Record<SheetUnit, number> = { 'ohm/sq': 1, 'kohm/sq': 1e3, 'mohm/sq': 1e-3 };
 const MAX_ISSUES = 50;
 
-export type Parsed<T> = { ok: true; points: T; units: Record<string, string> } | { ok: false; issues: ApiIssue[] };
+export type Parsed<T> = { ok: true; points: T; units: Record<string, string>; declared: Record<string, string> } | { ok: false; issues: ApiIssue[] };
 
 /** Spellings people use for the same unit, folded to ours. */
 function normaliseUnit(raw: string): string {
@@ -150,7 +150,7 @@ export function parseProfileCsv(text: string, form: { depthUnit?: DepthUnit; con
   }
   if (issues.length) return { ok: false, issues };
   if (depthUm.length < 3) return { ok: false, issues: [issue(hl + 1, 'a profile needs at least 3 points')] };
-  return { ok: true, points: { depthUm, concentrationCm3 }, units: { depth: du.unit!, concentration: cu.unit! } };
+  return { ok: true, points: { depthUm, concentrationCm3 }, units: { depth: du.unit!, concentration: cu.unit! }, declared: t.declared };
 }
 
 /** Four-point-probe readings: site label and sheet resistance. */
@@ -187,5 +187,5 @@ export function parseSheetCsv(text: string, form: { sheetUnit?: SheetUnit }): Pa
     ohmSq.push(r * TO_OHM_SQ[ru.unit!]);
   }
   if (issues.length) return { ok: false, issues };
-  return { ok: true, points: { sites, ohmSq }, units: { sheet_resistance: ru.unit! } };
+  return { ok: true, points: { sites, ohmSq }, units: { sheet_resistance: ru.unit! }, declared: t.declared };
 }

@@ -18,6 +18,7 @@ const EXTRA_LABELS: Record<string, string> = {
   method: 'Method',
   implantSurface: 'Implant at the surface',
   concentrationDependent: 'Concentration-dependent D',
+  useTubeCalibration: 'Tube calibration',
   points: 'Profile points',
   depthUm: 'Profile depth (µm)',
 };

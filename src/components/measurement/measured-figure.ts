@@ -3,6 +3,7 @@
 // traces, so colours match the workspace), the measured points as open markers,
 // and the predicted and measured junctions as labelled vertical lines.
 import type { RecipeResult } from '../../../shared/engine/types';
+import type { Dopant } from '../../../shared/engine/dopants';
 import type { ProfilePoints } from '../../../shared/schemas/measurements';
 import { DOPANT_COLOURS, profileFigure, type FigureOptions } from '../profile/profile-figure';
 import { formatSig } from '../recipe/recipe-format';
@@ -14,6 +15,8 @@ export interface MeasuredSeries {
   label: string;
   points: ProfilePoints;
   junctionsUm: number[];
+  /** The measured dopant, when the file named it. */
+  species?: Dopant;
 }
 
 /** Plotly stays quick with a few thousand markers; beyond that every n-th point carries the shape. */
@@ -26,8 +29,9 @@ export function thin<T>(values: T[], max = MAX_MARKERS): T[] {
   return Array.from({ length: max }, (_, i) => values[Math.round(i * step)]);
 }
 
-/** Measured markers take the hue of the predicted dopant when there is one, the text colour otherwise. */
-export function measuredColour(result: RecipeResult, textColour: string): string {
+/** Measured markers take the hue of the dopant the file names, else of the only predicted dopant, else the text colour. */
+export function measuredColour(result: RecipeResult, textColour: string, species?: Dopant): string {
+  if (species) return DOPANT_COLOURS[species];
   const dopants = result.profile.dopants;
   return dopants.length === 1 ? DOPANT_COLOURS[dopants[0].dopant] : textColour;
 }
@@ -47,7 +51,7 @@ export function overlayFigure(result: RecipeResult, measured: MeasuredSeries | n
   const shapes = [...layout.shapes];
   let range = layout.yaxis.range;
   if (measured) {
-    const colour = measuredColour(result, options.textColour);
+    const colour = measuredColour(result, options.textColour, measured.species);
     const floor = 10 ** range[0];
     const idx = thin(measured.points.depthUm.map((_, i) => i));
     data.push({

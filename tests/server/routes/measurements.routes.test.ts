@@ -49,7 +49,7 @@ describe('uploads', () => {
     const options = { factor: 1, tubeId: tubes.anneal, noisePct: 0, seed: 1 };
     const p = await upload(operator, lotId, 'sims.csv', syntheticProfileCsv(doc, options), { kind: 'profile', method: 'SIMS' });
     expect(p.status).toBe(201);
-    expect(p.body.data).toMatchObject({ kind: 'profile', method: 'SIMS', fileName: 'sims.csv' });
+    expect(p.body.data).toMatchObject({ kind: 'profile', method: 'SIMS', fileName: 'sims.csv', summary: { species: 'B' } });
     const s = await upload(engineer, lotId, 'rs.csv', syntheticSheetCsv(doc, options), { kind: 'sheet_resistance' });
     expect(s.status).toBe(201);
     const res = await admin.get(`/api/lots/${lotId}/measurements`);
