@@ -14,6 +14,9 @@ export interface RecipeFilters {
   state: VersionState | null;
   ownerId: number | null;
   tubeId: number | null;
+  /** First and last day of the last change (YYYY-MM-DD, read as UTC days by the server). */
+  changedFrom: string | null;
+  changedTo: string | null;
 }
 
 export interface TableView {
@@ -40,6 +43,8 @@ export function toListQuery(view: TableView, filters: RecipeFilters): ListRecipe
   if (filters.state) query.state = filters.state;
   if (filters.ownerId) query.ownerId = filters.ownerId;
   if (filters.tubeId) query.tubeId = filters.tubeId;
+  if (filters.changedFrom) query.changedFrom = filters.changedFrom;
+  if (filters.changedTo) query.changedTo = filters.changedTo;
   return query;
 }
 
@@ -47,7 +52,7 @@ export function useRecipesTable() {
   const store = useRecipesStore();
   const { report } = useApiError();
   const view = reactive<TableView>({ first: 0, rows: 20, sortField: 'updatedAt', sortOrder: -1 });
-  const filters = reactive<RecipeFilters>({ name: '', dopant: null, state: null, ownerId: null, tubeId: null });
+  const filters = reactive<RecipeFilters>({ name: '', dopant: null, state: null, ownerId: null, tubeId: null, changedFrom: null, changedTo: null });
   const nameText = ref('');
   let nameTimer: ReturnType<typeof setTimeout> | undefined;
 

@@ -1,7 +1,8 @@
 // Words and filters of the Audit trail screen. Filters live in the page's
 // address, so a filtered view (say, one lot's history) can be linked to.
-import type { LocationQuery, LocationQueryRaw } from 'vue-router';
-import type { AuditQuery } from '../../../shared/schemas/signoff';
+import type { LocationQuery, LocationQueryRaw, RouteLocationRaw } from 'vue-router';
+import type { AuditQuery, AuditRow } from '../../../shared/schemas/signoff';
+import { fromIsoDate } from '../common/calendar-date';
 
 /** Readable names of the actions the server records (an unknown action shows its code). */
 export const AUDIT_ACTION_LABELS: Record<string, string> = {
@@ -50,8 +51,6 @@ export interface AuditFilters {
 
 export const NO_FILTERS: AuditFilters = { from: null, to: null, actorId: null, action: null, entityType: null, entityId: null };
 
-const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
-
 function one(value: LocationQuery[string]): string | null {
   const v = Array.isArray(value) ? value[0] : value;
   return typeof v === 'string' && v.trim() !== '' ? v.trim() : null;
@@ -64,7 +63,7 @@ function positiveInt(value: LocationQuery[string]): number | null {
 
 function isoDate(value: LocationQuery[string]): string | null {
   const v = one(value);
-  return v && ISO_DATE.test(v) ? v : null;
+  return fromIsoDate(v) ? v : null;
 }
 
 /** Filters from the page address; anything malformed is left out rather than sent. */
@@ -96,23 +95,34 @@ export function toAuditQuery(filters: AuditFilters, page: number, pageSize: numb
   return query;
 }
 
-/** A local calendar date as YYYY-MM-DD (a date picker's Date, without time zone shifts). */
-export function toIsoDate(date: Date | null): string | null {
-  if (!date || Number.isNaN(date.getTime())) return null;
-  const pad = (n: number) => String(n).padStart(2, '0');
-  return `${date.getFullYear()}-${pad(date.getMonth() + 1)}-${pad(date.getDate())}`;
-}
-
-/** The Date a date picker shows for YYYY-MM-DD (local midnight). */
-export function fromIsoDate(text: string | null): Date | null {
-  if (!text || !ISO_DATE.test(text)) return null;
-  const [y, m, d] = text.split('-').map(Number);
-  return new Date(y, m - 1, d);
-}
-
 /** A transition as "In review → Released"; a single state alone; '' when there is none. */
 export function transitionText(from: string | null, to: string | null): string {
   const word = (s: string) => s.replace(/_/g, ' ').replace(/^./, (c) => c.toUpperCase());
   if (from && to) return `${word(from)} → ${word(to)}`;
   return to ? `→ ${word(to)}` : from ? `${word(from)} →` : '';
+}
+
+const positive = (v: unknown): v is number => typeof v === 'number' && Number.isInteger(v) && v > 0;
+
+/** How the Record cell names a row's record: "v3" for a recipe version that says its number, else "#id". */
+export function recordText(row: AuditRow): string {
+  if (row.entityId === null) return '';
+  if (row.entityType === 'recipe_version' && positive(row.details?.versionNo)) return `v${row.details.versionNo}`;
+  return `#${row.entityId}`;
+}
+
+/**
+ * Where a row's record opens in the app, or null. A recipe version opens in
+ * its recipe's workspace, which needs the recipe id: rows written before the
+ * server recorded it in details stay plain text.
+ */
+export function recordRoute(row: AuditRow): RouteLocationRaw | null {
+  if (row.entityId === null) return null;
+  if (row.entityType === 'lot') return { name: 'lot', params: { id: row.entityId } };
+  if (row.entityType === 'recipe') return { name: 'recipe', params: { id: row.entityId } };
+  const recipeId = row.details?.recipeId;
+  if (row.entityType === 'recipe_version' && positive(recipeId)) {
+    return { name: 'recipe', params: { id: recipeId }, query: { version: row.entityId } };
+  }
+  return null;
 }

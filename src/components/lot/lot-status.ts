@@ -1,14 +1,8 @@
 // The life of a lot on the floor: open → in progress → complete, or scrapped
-// before it completes. The server stores any status; the screens offer only
-// these moves, and ask before the ones that cannot be taken back.
-import type { LotStatus } from '../../../shared/schemas/lots';
-
-export const LOT_NEXT: Record<LotStatus, readonly LotStatus[]> = {
-  open: ['in_progress', 'scrapped'],
-  in_progress: ['complete', 'scrapped'],
-  complete: [],
-  scrapped: [],
-};
+// before it completes. Which moves exist is LOT_STATUS_MOVES in shared/ (the
+// server refuses any other with 409 'wrong_state'); here are the words and
+// colours of the screens, which ask before the moves that cannot be taken back.
+import { LOT_STATUS_MOVES, type LotStatus } from '../../../shared/schemas/lots';
 
 /** The button that moves a lot into a status. */
 export const LOT_MOVE_LABELS: Record<LotStatus, string> = {
@@ -26,7 +20,7 @@ export const LOT_STATUS_SEVERITY: Record<LotStatus, 'info' | 'warn' | 'success' 
 };
 
 /** Moves that end the lot's run; they are confirmed first. */
-export const isFinal = (status: LotStatus) => LOT_NEXT[status].length === 0;
+export const isFinal = (status: LotStatus) => LOT_STATUS_MOVES[status].length === 0;
 
 /** Lots still on the floor (the Bench's "Lots in flight"). */
 export const isInFlight = (status: LotStatus) => status === 'open' || status === 'in_progress';
