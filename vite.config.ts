@@ -28,6 +28,7 @@ export default defineConfig({
           name: 'unit',
           environment: 'node',
           include: ['tests/engine/**/*.test.ts', 'tests/shared/**/*.test.ts', 'tests/src/**/*.test.ts'],
+          setupFiles: ['tests/support/install-unit-reader.ts'],
         },
       },
       {

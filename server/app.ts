@@ -6,6 +6,8 @@ import express from 'express';
 import session from 'express-session';
 import MySQLStoreFactory from 'express-mysql-session';
 import helmet from 'helmet';
+// Recipe quantities may arrive as strings with units (API, imports).
+import '../shared/schemas/unit-reader';
 import { rateLimit } from 'express-rate-limit';
 import type { Database } from './db/index';
 import { apiNotFound, errorHandler } from './middleware/error-handler';

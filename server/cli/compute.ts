@@ -1,5 +1,6 @@
 // `npm run compute -- recipe.json` (or `-` for stdin): validates a recipe document and
 // prints the engine's result JSON. Invalid input: the issues on stderr, exit code 1.
+import '../../shared/schemas/unit-reader';
 import { readFileSync } from 'node:fs';
 import { computeRecipe } from '../../shared/engine/index';
 import { EngineInputError } from '../../shared/engine/errors';

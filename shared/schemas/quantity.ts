@@ -1,10 +1,19 @@
-// Quantities with units for recipe fields. Only mathjs's unit factory is pulled
-// in (create() with unitDependencies), so the browser bundle does not carry the
-// whole expression engine.
-import { create, unitDependencies } from 'mathjs';
+// Quantities with units for recipe fields. Numbers (the forms' case) need
+// nothing more; strings with units are read by mathjs through unit-reader.ts,
+// which the server and the command line load at start and the browser loads
+// only when it needs it (a JSON import, a unit typed into a field), so the
+// workspace does not carry mathjs up front.
 import { z } from 'zod';
 
-const math = create({ unitDependencies });
+/** Converts "value unit" text to a number in `unit`; null when the text has a unit but no number. Throws when unreadable. */
+export type UnitReader = (text: string, unit: string) => number | null;
+
+let unitReader: UnitReader | null = null;
+
+/** Installs the reader for strings with units (see unit-reader.ts). */
+export function installUnitReader(reader: UnitReader): void {
+  unitReader = reader;
+}
 
 /** What a recipe field measures, its canonical unit (mathjs spelling) and how to show it. */
 export interface QuantityKind {
@@ -72,13 +81,16 @@ export function parseQuantity(input: unknown, kind: QuantityKind, label: string)
   const text = normaliseUnitText(input);
   if (text === '') return { ok: false, message: `Enter ${label.toLowerCase()}` };
   if (/^[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?$/.test(text)) return { ok: true, value: Number(text) };
+  if (!unitReader) {
+    return { ok: false, message: `${label}: units are still loading; enter a number in ${kind.display} or try again in a moment` };
+  }
   let value: number;
   try {
-    const u = math.unit(text);
-    if (u.value === null) {
+    const read = unitReader(text, kind.unit);
+    if (read === null) {
       return { ok: false, message: `${label}: "${input}" has a unit but no number` };
     }
-    value = u.toNumber(kind.unit);
+    value = read;
   } catch {
     return {
       ok: false,

@@ -5,6 +5,7 @@
 // and the edits stay on screen until the person chooses.
 import { computed, ref, shallowRef } from 'vue';
 import { useToast } from 'primevue/usetoast';
+import { useUnitReader } from './use-unit-reader';
 import { parseRecipeDocument, type RecipeIssue } from '../../shared/schemas/recipe';
 import type { RecipeDetail, RecipeVersion } from '../../shared/schemas/recipes-api';
 import { ApiError } from '../api/client';
@@ -36,7 +37,11 @@ export function useRecipeDraft() {
   /** Issues the server returned for the last save, paths without the 'document.' prefix. */
   const serverIssues = ref<RecipeIssue[]>([]);
 
-  const parsed = computed(() => parseRecipeDocument(doc.value));
+  const unitsReady = useUnitReader();
+  const parsed = computed(() => {
+    void unitsReady.value; // parse again when the unit reader arrives, so a unit typed meanwhile is read
+    return parseRecipeDocument(doc.value);
+  });
   const readOnly = computed(() => readOnlyReason(version.value, auth.user));
   const dirty = computed(() => !!version.value && readOnly.value === null && (isDirty(parsed.value, version.value.document) || note.value !== version.value.note));
 

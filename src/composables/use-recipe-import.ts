@@ -7,6 +7,7 @@ import type { RecipeDetail } from '../../shared/schemas/recipes-api';
 import { ApiError } from '../api/client';
 import { useRecipesStore } from '../stores/recipes';
 import { describeError } from './use-api-error';
+import { loadUnitReader } from './use-unit-reader';
 
 export type ImportCheck = { ok: true; raw: unknown; stepCount: number } | { ok: false; issues: RecipeIssue[] };
 
@@ -50,7 +51,9 @@ export function useRecipeImport() {
     reset();
     fileName.value = file.name;
     name.value = nameFromFileName(file.name);
-    check.value = checkImportText(await file.text());
+    const text = await file.text();
+    await loadUnitReader();
+    check.value = checkImportText(text);
   }
 
   /** Creates the recipe from the checked document; null when the server refused (messages shown). */
