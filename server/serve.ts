@@ -6,6 +6,7 @@ import { connectDatabase } from './db/index';
 import { runMigrations } from './db/migrate';
 import { seedDemo } from './db/seed';
 import { seedScenario } from './db/seed-scenario';
+import { backfillReleasedListColumns } from './services/recipes.service';
 import type { Env } from './env';
 import { createMailer, deliverOutbox, type Mailer } from './services/mail/outbox.service';
 import { startSmtpFake, type SmtpFake } from './services/mail/smtp-fake';
@@ -19,6 +20,7 @@ export interface Running {
 export async function serve(env: Env, databaseUrl: string, opts: { seed: boolean; serveClient: boolean }): Promise<Running> {
   const database = connectDatabase(databaseUrl);
   await runMigrations(database.db);
+  await backfillReleasedListColumns(database.db);
   if (opts.seed) {
     await seedDemo(database.db);
     await seedScenario(database.db);

@@ -169,6 +169,19 @@ async function computedColumns(db: Db, document: RecipeDocument) {
   };
 }
 
+/**
+ * Fills the released-version list columns of recipes released before those
+ * columns existed (migration 0005). Idempotent; touches only rows that need it.
+ */
+export async function backfillReleasedListColumns(db: Db): Promise<number> {
+  const stale = await db
+    .select({ id: recipes.id })
+    .from(recipes)
+    .where(and(sql`${recipes.releasedVersionNo} IS NOT NULL`, eq(recipes.releasedDopants, ''), eq(recipes.releasedTubeIds, '')));
+  for (const { id } of stale) await db.transaction((tx) => refreshRecipeListColumns(tx, id));
+  return stale.length;
+}
+
 /** Dopants and tube ids of a document as ",B,P," lists (commas around each for LIKE filters). */
 function listColumns(doc: RecipeDocument): { dopants: string; tubeIds: string } {
   const dopants = [...new Set(doc.steps.flatMap((s) => ('dopant' in s ? [s.dopant] : [])))];

@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { recipeVersions, recipes } from '../../../server/db/schema';
+import { backfillReleasedListColumns } from '../../../server/services/recipes.service';
 import { boronTwoStep } from '../../support/sample-recipes';
 import { useTestApp, type Agent } from '../../support/test-app';
 
@@ -114,6 +115,15 @@ describe('recipes', () => {
     expect(row.dopants).toEqual(['B']);
     expect((await operator.get('/api/recipes?dopant=P&name=phos%20draft')).body.data.total).toBe(0);
     expect((await engineer.get('/api/recipes?dopant=P&name=phos%20draft')).body.data.total).toBe(1);
+  });
+
+  it('backfills the released list columns of recipes released before they existed', async () => {
+    const row = (await engineer.get('/api/recipes?name=phos%20draft')).body.data.rows[0];
+    await ctx.database.db.update(recipes).set({ releasedDopants: '', releasedTubeIds: '' }).where(eq(recipes.id, row.id));
+    expect(await backfillReleasedListColumns(ctx.database.db)).toBeGreaterThanOrEqual(1);
+    const operator = await ctx.signIn('operator');
+    expect((await operator.get('/api/recipes?name=phos%20draft')).body.data.rows[0].dopants).toEqual(['B']);
+    expect(await backfillReleasedListColumns(ctx.database.db)).toBe(0);
   });
 
   it('filters by the day of the last change', async () => {
