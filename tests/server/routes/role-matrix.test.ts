@@ -92,6 +92,21 @@ describe('role matrix', () => {
   });
 });
 
+describe('malformed ids', () => {
+  const withId = Object.entries(MATRIX).filter(([route]) => route.includes(':id'));
+
+  it.each(withId)('%s answers 400 naming id for a malformed id', async (route, access) => {
+    const [method, path] = route.split(' ');
+    const role: Role = access === 'signed-in' || access === 'public' ? 'admin' : access[0];
+    const agent = await agentFor(role);
+    for (const bad of ['abc', '0', '-3', '1.5']) {
+      const res = await agent[method.toLowerCase() as 'get' | 'post' | 'patch' | 'put'](path.replace(':id', bad)).send({});
+      expect(res.status, `${route} with id ${bad}`).toBe(400);
+      expect(res.body.error.issues.map((i: { path: string }) => i.path)).toContain('id');
+    }
+  });
+});
+
 const agents = new Map<Role, Promise<Agent>>();
 function agentFor(role: Role): Promise<Agent> {
   if (!agents.has(role)) agents.set(role, ctx.signIn(role));
