@@ -1,7 +1,7 @@
 // Measured results against a lot. An upload is parsed and checked whole
 // before anything is written; then file, points and summary go in with an
 // audit row in one transaction.
-import { desc, eq } from 'drizzle-orm';
+import { desc, eq, type SQL } from 'drizzle-orm';
 import { summarizeProfile, summarizeSheet } from '../../shared/analysis/measured';
 import type { RecipeResult } from '../../shared/engine/types';
 import { DOPANTS } from '../../shared/engine/dopants';
@@ -70,15 +70,20 @@ export async function storeUpload(db: Db, actor: Actor, lotId: number, rawFields
     await recordAudit(tx, { actor, action: 'measurement.upload', entityType: 'lot', entityId: lotId, details: { measurementId: mId, kind: fields.kind, file: file.originalname, units: parsed.units } });
     return mId;
   });
-  return (await listMeasurements(db, lotId)).find((m) => m.id === id)!;
+  const [stored] = await selectMeasurements(db, eq(measurements.id, id));
+  return stored;
 }
 
-export async function listMeasurements(db: Db, lotId: number): Promise<Measurement[]> {
+export function listMeasurements(db: Db, lotId: number): Promise<Measurement[]> {
+  return selectMeasurements(db, eq(measurements.lotId, lotId));
+}
+
+async function selectMeasurements(db: Db, where: SQL): Promise<Measurement[]> {
   const rows = await db
     .select({ m: measurements, name: users.name })
     .from(measurements)
     .innerJoin(users, eq(users.id, measurements.uploadedById))
-    .where(eq(measurements.lotId, lotId))
+    .where(where)
     .orderBy(desc(measurements.id));
   return rows.map(({ m, name }) => ({
     id: m.id,
